@@ -1,0 +1,55 @@
+/**
+ * Entry point of the CLI: builds the commander program, runs it, and maps outcomes to exit
+ * statuses (grep convention): 0 = a certified counterexample was found (or, for commands that
+ * only report, success), 1 = none found, 2 = usage or input error.
+ */
+import { Command, CommanderError } from 'commander';
+import { InputError } from '../errors.js';
+import { addInvariantsCommand } from './invariants.js';
+import { TOOL_VERSION } from '../version.js';
+
+/** What a command's action returns: the process's exit status. */
+export type ExitStatus = 0 | 1 | 2;
+
+/** Holder through which command actions hand their exit status back to main(). */
+export interface CommandOutcome {
+  status: ExitStatus;
+}
+
+export function buildProgram(outcome: CommandOutcome): Command {
+  const program = new Command();
+  program
+    .name('refute')
+    .description('Hunt certified counterexamples to conjectured graph inequalities.')
+    .version(TOOL_VERSION)
+    .showHelpAfterError('(run with --help for usage)')
+    .exitOverride()
+    .configureOutput({ writeErr: (s) => process.stderr.write(s) });
+  addInvariantsCommand(program, outcome);
+  return program;
+}
+
+/** Runs the CLI on argv (as process.argv) and resolves to the exit status. */
+export async function main(argv: string[]): Promise<number> {
+  const outcome: CommandOutcome = { status: 0 };
+  const program = buildProgram(outcome);
+  try {
+    await program.parseAsync(argv);
+    return outcome.status;
+  } catch (err) {
+    if (err instanceof CommanderError) {
+      // --help and --version end through here with exit code 0.
+      return err.exitCode === 0 ? 0 : 2;
+    }
+    if (err instanceof InputError) {
+      process.stderr.write(`refute: ${err.message}\n`);
+      return 2;
+    }
+    if (isBrokenPipe(err)) return outcome.status;
+    throw err;
+  }
+}
+
+function isBrokenPipe(err: unknown): boolean {
+  return typeof err === 'object' && err !== null && (err as { code?: string }).code === 'EPIPE';
+}

@@ -1,0 +1,26 @@
+/**
+ * The public surface of the `refute` package: what a conjecture file imports
+ * (`import { defineConjecture } from 'refute'`) and what a script may use as a library.
+ */
+export type { Graph } from './graph/graph.js';
+export { hasEdge, neighbors, edgeList, graphsEqual } from './graph/graph.js';
+export {
+  fromEdges,
+  fromAdjacencyMatrix,
+  fromUpperTriangleBits,
+  complement,
+  inducedSubgraph,
+  relabel,
+} from './graph/builders.js';
+export * as families from './graph/families.js';
+export { encodeGraph6, decodeGraph6, Graph6ParseError } from './graph/graph6.js';
+export {
+  INVARIANTS,
+  InvariantMemo,
+  invariantNames,
+  computeInvariant,
+  type InvariantKind,
+  type InvariantValue,
+  type InvariantDefinition,
+} from './invariants/registry.js';
+export { InputError, InvariantDomainError } from './errors.js';
