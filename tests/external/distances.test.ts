@@ -22,7 +22,8 @@ describe('wienerIndex', () => {
     }
   });
   test('wienerIndex(C_n) is n^3/8 or n(n^2-1)/8', () => {
-    for (const n of [3, 4, 9, 10, 35]) expect(inv(F.cycle(n), 'wienerIndex')).toBe(n % 2 === 0 ? n ** 3 / 8 : (n * (n * n - 1)) / 8);
+    for (const n of [3, 4, 9, 10, 35])
+      expect(inv(F.cycle(n), 'wienerIndex')).toBe(n % 2 === 0 ? n ** 3 / 8 : (n * (n * n - 1)) / 8);
   });
 });
 
@@ -63,7 +64,8 @@ describe('diameter, radius, girth and the conventions of INVARIANTS.md', () => {
 
 describe('triangles and degree indices', () => {
   test('triangleCount(K_n) = C(n,3), also across word boundaries', () => {
-    for (const n of [3, 10, 33, 40]) expect(inv(F.complete(n), 'triangleCount')).toBe((n * (n - 1) * (n - 2)) / 6);
+    for (const n of [3, 10, 33, 40])
+      expect(inv(F.complete(n), 'triangleCount')).toBe((n * (n - 1) * (n - 2)) / 6);
   });
   test('triangleCount(friendship F_k) = k and of the wheel W_n = n-1 (n >= 5)', () => {
     expect(inv(F.friendship(5), 'triangleCount')).toBe(5);

@@ -11,11 +11,30 @@ import { invariantToJson } from '../../src/invariants/encode.js';
 import { expectAllClose, expectClose } from '../support/assert-close.js';
 
 const EXACT = [
-  'order', 'size', 'degreeSequence', 'componentCount', 'isConnected', 'isBipartite', 'isTree', 'isForest',
-  'diameter', 'radius', 'girth', 'wienerIndex', 'transmissions', 'triangleCount', 'firstZagrebIndex', 'secondZagrebIndex',
+  'order',
+  'size',
+  'degreeSequence',
+  'componentCount',
+  'isConnected',
+  'isBipartite',
+  'isTree',
+  'isForest',
+  'diameter',
+  'radius',
+  'girth',
+  'wienerIndex',
+  'transmissions',
+  'triangleCount',
+  'firstZagrebIndex',
+  'secondZagrebIndex',
 ];
 const REAL = ['randicIndex', 'harmonicIndex'];
-const SPECTRA = ['adjacencySpectrum', 'laplacianSpectrum', 'signlessLaplacianSpectrum', 'normalizedLaplacianSpectrum'];
+const SPECTRA = [
+  'adjacencySpectrum',
+  'laplacianSpectrum',
+  'signlessLaplacianSpectrum',
+  'normalizedLaplacianSpectrum',
+];
 
 describe('invariants against networkx/numpy on random graphs', () => {
   test('the fixture has at least 200 graphs and names only registered invariants', () => {
@@ -26,7 +45,9 @@ describe('invariants against networkx/numpy on random graphs', () => {
     test(`${name} equals networkx's exactly`, () => {
       for (const rec of fixture.graphs) {
         const value = new InvariantMemo(decodeGraph6(rec.graph6)).get(name);
-        expect(invariantToJson(value), `${name} of ${rec.graph6}`).toEqual((rec as Record<string, unknown>)[name]);
+        expect(invariantToJson(value), `${name} of ${rec.graph6}`).toEqual(
+          (rec as Record<string, unknown>)[name],
+        );
       }
     });
   }
@@ -34,7 +55,12 @@ describe('invariants against networkx/numpy on random graphs', () => {
     test(`${name} equals the reference within 1e-9`, () => {
       for (const rec of fixture.graphs) {
         const value = new InvariantMemo(decodeGraph6(rec.graph6)).get(name) as number;
-        expectClose(value, (rec as Record<string, unknown>)[name] as number, 1e-9, `${name} of ${rec.graph6}`);
+        expectClose(
+          value,
+          (rec as Record<string, unknown>)[name] as number,
+          1e-9,
+          `${name} of ${rec.graph6}`,
+        );
       }
     });
   }
@@ -42,7 +68,12 @@ describe('invariants against networkx/numpy on random graphs', () => {
     test(`${name} equals numpy's eigvalsh within 1e-9`, () => {
       for (const rec of fixture.graphs) {
         const value = new InvariantMemo(decodeGraph6(rec.graph6)).get(name) as number[];
-        expectAllClose(value, (rec as Record<string, unknown>)[name] as number[], 1e-9, `${name} of ${rec.graph6}`);
+        expectAllClose(
+          value,
+          (rec as Record<string, unknown>)[name] as number[],
+          1e-9,
+          `${name} of ${rec.graph6}`,
+        );
       }
     });
   }

@@ -15,20 +15,34 @@ const range = (a: number, b: number) => Array.from({ length: b - a + 1 }, (_, i)
 
 describe('adjacency spectra of families', () => {
   test('adjacencySpectrum(K_n) is n-1 once and -1 n-1 times', () => {
-    for (const n of [1, 2, 5, 12, 40]) expectAllClose(spectrum(F.complete(n)), [n - 1, ...new Array(n - 1).fill(-1)], 1e-10);
+    for (const n of [1, 2, 5, 12, 40])
+      expectAllClose(spectrum(F.complete(n)), [n - 1, ...new Array(n - 1).fill(-1)], 1e-10);
   });
   test('adjacencySpectrum(C_n) is 2cos(2πk/n), k = 0..n-1', () => {
     for (const n of [3, 4, 7, 10, 33]) {
-      expectAllClose(spectrum(F.cycle(n)), descending(range(0, n - 1).map((k) => 2 * Math.cos((2 * Math.PI * k) / n))), 1e-10);
+      expectAllClose(
+        spectrum(F.cycle(n)),
+        descending(range(0, n - 1).map((k) => 2 * Math.cos((2 * Math.PI * k) / n))),
+        1e-10,
+      );
     }
   });
   test('adjacencySpectrum(P_n) is 2cos(πk/(n+1)), k = 1..n', () => {
     for (const n of [1, 2, 6, 19, 50]) {
-      expectAllClose(spectrum(F.path(n)), descending(range(1, n).map((k) => 2 * Math.cos((Math.PI * k) / (n + 1)))), 1e-10);
+      expectAllClose(
+        spectrum(F.path(n)),
+        descending(range(1, n).map((k) => 2 * Math.cos((Math.PI * k) / (n + 1)))),
+        1e-10,
+      );
     }
   });
   test('adjacencySpectrum(K_{a,b}) is ±sqrt(ab) and 0 (a+b-2 times)', () => {
-    for (const [a, b] of [[1, 1], [2, 3], [4, 4], [3, 9]]) {
+    for (const [a, b] of [
+      [1, 1],
+      [2, 3],
+      [4, 4],
+      [3, 9],
+    ]) {
       const r = Math.sqrt(a * b);
       expectAllClose(spectrum(F.completeBipartite(a, b)), [r, ...new Array(a + b - 2).fill(0), -r], 1e-10);
     }
@@ -49,13 +63,18 @@ describe('adjacency spectra of families', () => {
   });
   test('energy(Petersen) = 3 + 5 + 8 = 16 and estradaIndex = e^3 + 5e + 4e^-2', () => {
     expectClose(computeInvariant(F.petersen(), 'energy') as number, 16, 1e-10);
-    expectClose(computeInvariant(F.petersen(), 'estradaIndex') as number, Math.exp(3) + 5 * Math.E + 4 * Math.exp(-2), 1e-9);
+    expectClose(
+      computeInvariant(F.petersen(), 'estradaIndex') as number,
+      Math.exp(3) + 5 * Math.E + 4 * Math.exp(-2),
+      1e-9,
+    );
   });
 });
 
 describe('Laplacian-type spectra', () => {
   test('laplacianSpectrum(K_n) is n (n-1 times) and 0', () => {
-    for (const n of [1, 2, 6, 25]) expectAllClose(spectrum(F.complete(n), 'laplacianSpectrum'), [...new Array(n - 1).fill(n), 0], 1e-10);
+    for (const n of [1, 2, 6, 25])
+      expectAllClose(spectrum(F.complete(n), 'laplacianSpectrum'), [...new Array(n - 1).fill(n), 0], 1e-10);
   });
   test('laplacianSpectrum(C_n) is 2 - 2cos(2πk/n)', () => {
     const n = 9;
@@ -66,15 +85,28 @@ describe('Laplacian-type spectra', () => {
     );
   });
   test('algebraicConnectivity(P_n) = 2 - 2cos(π/n)', () => {
-    for (const n of [2, 5, 30]) expectClose(computeInvariant(F.path(n), 'algebraicConnectivity') as number, 2 - 2 * Math.cos(Math.PI / n), 1e-10);
+    for (const n of [2, 5, 30])
+      expectClose(
+        computeInvariant(F.path(n), 'algebraicConnectivity') as number,
+        2 - 2 * Math.cos(Math.PI / n),
+        1e-10,
+      );
   });
   test('algebraicConnectivity is exactly 0 on a disconnected graph', () => {
     expectClose(computeInvariant(F.emptyGraph(3), 'algebraicConnectivity') as number, 0, 0);
   });
   test('signlessLaplacianSpectrum(Petersen) is 3 + λ: 6, 4 five times, 1 four times', () => {
-    expectAllClose(spectrum(F.petersen(), 'signlessLaplacianSpectrum'), [6, 4, 4, 4, 4, 4, 1, 1, 1, 1], 1e-10);
+    expectAllClose(
+      spectrum(F.petersen(), 'signlessLaplacianSpectrum'),
+      [6, 4, 4, 4, 4, 4, 1, 1, 1, 1],
+      1e-10,
+    );
   });
   test('normalizedLaplacianSpectrum(K_{a,b}) is 2, 1 (a+b-2 times), 0', () => {
-    expectAllClose(spectrum(F.completeBipartite(3, 5), 'normalizedLaplacianSpectrum'), [2, 1, 1, 1, 1, 1, 1, 0], 1e-10);
+    expectAllClose(
+      spectrum(F.completeBipartite(3, 5), 'normalizedLaplacianSpectrum'),
+      [2, 1, 1, 1, 1, 1, 1, 0],
+      1e-10,
+    );
   });
 });

@@ -14,7 +14,12 @@ import { randomGraph, seededRng } from '../support/random-graph.js';
 
 describe('fromEdges()', () => {
   test('fromEdges() merges duplicate edges and keeps degrees and size consistent', () => {
-    const g = fromEdges(4, [[0, 1], [1, 0], [1, 2], [2, 3]]);
+    const g = fromEdges(4, [
+      [0, 1],
+      [1, 0],
+      [1, 2],
+      [2, 3],
+    ]);
     expect(g.size).toBe(3);
     expect(Array.from(g.degrees)).toEqual([1, 2, 2, 1]);
     expect(hasEdge(g, 1, 0) && hasEdge(g, 0, 1)).toBe(true);
@@ -24,18 +29,35 @@ describe('fromEdges()', () => {
     expect(() => fromEdges(3, [[0, 3]])).toThrow('Expected edge endpoints in 0..2 but found 0-3');
   });
   test('fromEdges() handles rows longer than one word (n = 1000)', () => {
-    const g = fromEdges(1000, [[0, 999], [31, 32], [500, 501]]);
+    const g = fromEdges(1000, [
+      [0, 999],
+      [31, 32],
+      [500, 501],
+    ]);
     expect(g.wordsPerRow).toBe(32);
     expect(Array.from(neighbors(g, 999))).toEqual([0]);
-    expect(edgeList(g)).toEqual([[0, 999], [31, 32], [500, 501]]);
+    expect(edgeList(g)).toEqual([
+      [0, 999],
+      [31, 32],
+      [500, 501],
+    ]);
   });
 });
 
 describe('fromAdjacencyMatrix()', () => {
   test('fromAdjacencyMatrix() builds the path P3 and rejects asymmetric or looped matrices', () => {
-    const g = fromAdjacencyMatrix([[0, 1, 0], [1, 0, 1], [0, 1, 0]]);
+    const g = fromAdjacencyMatrix([
+      [0, 1, 0],
+      [1, 0, 1],
+      [0, 1, 0],
+    ]);
     expect(graphsEqual(g, path(3))).toBe(true);
-    expect(() => fromAdjacencyMatrix([[0, 1], [0, 0]])).toThrow(/symmetric/);
+    expect(() =>
+      fromAdjacencyMatrix([
+        [0, 1],
+        [0, 0],
+      ]),
+    ).toThrow(/symmetric/);
     expect(() => fromAdjacencyMatrix([[1]])).toThrow(/loop at vertex 0/);
   });
 });
@@ -44,7 +66,12 @@ describe('fromUpperTriangleBits()', () => {
   test('fromUpperTriangleBits() uses graph6 pair order 01, 02, 12, 03, ...', () => {
     // Bits of the graph6 specification example DQc: 0100101001 (pairs 02, 13, 04, 34).
     const g = fromUpperTriangleBits(5, [0, 1, 0, 0, 1, 0, 1, 0, 0, 1]);
-    expect(edgeList(g)).toEqual([[0, 2], [0, 4], [1, 3], [3, 4]]);
+    expect(edgeList(g)).toEqual([
+      [0, 2],
+      [0, 4],
+      [1, 3],
+      [3, 4],
+    ]);
   });
 });
 

@@ -17,10 +17,24 @@ describe('graph6 against the specification', () => {
   // B. D. McKay, "Description of graph6, sparse6 and digraph6 encodings", worked example:
   // n = 5 with edges 0-2 0-4 1-3 3-4 is written "DQc".
   test('encodeGraph6() gives the specification example DQc', () => {
-    expect(encodeGraph6(fromEdges(5, [[0, 2], [0, 4], [1, 3], [3, 4]]))).toBe('DQc');
+    expect(
+      encodeGraph6(
+        fromEdges(5, [
+          [0, 2],
+          [0, 4],
+          [1, 3],
+          [3, 4],
+        ]),
+      ),
+    ).toBe('DQc');
   });
   test('decodeGraph6() reads the specification example DQc', () => {
-    expect(edgeList(decodeGraph6('DQc'))).toEqual([[0, 2], [0, 4], [1, 3], [3, 4]]);
+    expect(edgeList(decodeGraph6('DQc'))).toEqual([
+      [0, 2],
+      [0, 4],
+      [1, 3],
+      [3, 4],
+    ]);
   });
   // The specification's N(n) examples: N(30) = 93; N(12345) = 126 66 63 120;
   // N(460175067) = 126 126 63 90 90 90 90 90.
@@ -42,7 +56,12 @@ describe('graph6 against the specification', () => {
     expect(encodeGraph6(petersen())).toBe('IheA@GUAo');
   });
   test('decodeGraph6() accepts the >>graph6<< header', () => {
-    expect(edgeList(decodeGraph6('>>graph6<<DQc'))).toEqual([[0, 2], [0, 4], [1, 3], [3, 4]]);
+    expect(edgeList(decodeGraph6('>>graph6<<DQc'))).toEqual([
+      [0, 2],
+      [0, 4],
+      [1, 3],
+      [3, 4],
+    ]);
   });
 });
 
@@ -59,13 +78,18 @@ describe('graph6 against networkx', () => {
 });
 
 describe('graph6 round trips', () => {
-  const arbitraryGraph = fc
-    .integer({ min: 1, max: 100 })
-    .chain((n) =>
-      fc
-        .array(fc.tuple(fc.integer({ min: 0, max: n - 1 }), fc.integer({ min: 0, max: n - 1 })), { maxLength: 300 })
-        .map((pairs) => fromEdges(n, pairs.filter(([u, v]) => u !== v))),
-    );
+  const arbitraryGraph = fc.integer({ min: 1, max: 100 }).chain((n) =>
+    fc
+      .array(fc.tuple(fc.integer({ min: 0, max: n - 1 }), fc.integer({ min: 0, max: n - 1 })), {
+        maxLength: 300,
+      })
+      .map((pairs) =>
+        fromEdges(
+          n,
+          pairs.filter(([u, v]) => u !== v),
+        ),
+      ),
+  );
   test('decodeGraph6(encodeGraph6(g)) equals g for random graphs up to n = 100', () => {
     fc.assert(
       fc.property(arbitraryGraph, (g) => {
@@ -78,7 +102,11 @@ describe('graph6 round trips', () => {
     );
   });
   test('the long N(n) form round trips a graph on 200 vertices', () => {
-    const g = fromEdges(200, [[0, 199], [63, 64], [100, 150]]);
+    const g = fromEdges(200, [
+      [0, 199],
+      [63, 64],
+      [100, 150],
+    ]);
     const s = encodeGraph6(g);
     expect(s.charCodeAt(0)).toBe(126);
     expect(graphsEqual(decodeGraph6(s), g)).toBe(true);

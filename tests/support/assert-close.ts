@@ -9,7 +9,12 @@ export function expectClose(actual: number, expected: number, tolerance = 1e-9, 
   expect(Math.abs(actual - expected), `${label}: ${actual} vs ${expected}`).toBeLessThanOrEqual(tolerance);
 }
 
-export function expectAllClose(actual: ArrayLike<number>, expected: ArrayLike<number>, tolerance = 1e-9, label = ''): void {
+export function expectAllClose(
+  actual: ArrayLike<number>,
+  expected: ArrayLike<number>,
+  tolerance = 1e-9,
+  label = '',
+): void {
   expect(actual.length, `${label}: length`).toBe(expected.length);
   for (let i = 0; i < expected.length; i++) expectClose(actual[i], expected[i], tolerance, `${label}[${i}]`);
 }
