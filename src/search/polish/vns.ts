@@ -29,7 +29,7 @@
 import { type Graph } from '../../graph/graph.js';
 import { type Evaluation } from '../../conjecture/types.js';
 import { FIXED_ORDER_FAMILIES, ORDER_CHANGING_FAMILIES } from './catalogue.js';
-import { isConnectedGraph } from './connectivity.js';
+import { isAdmissible } from './admissible.js';
 import { type MoveFamily } from './moves/move-family.js';
 import { randomRewire } from './moves/rewire-neighbourhood.js';
 import { randomIndex, randomOrder } from './random-order.js';
@@ -115,8 +115,7 @@ class Walk {
 
   /** The walk may stand on g: an allowed order, and connected when that is required. */
   admissible(g: Graph, minOrder = this.minOrder, maxOrder = this.maxOrder): boolean {
-    if (g.order < minOrder || g.order > maxOrder) return false;
-    return !this.settings.connected || isConnectedGraph(g);
+    return isAdmissible(g, { minOrder, maxOrder, connected: this.settings.connected });
   }
 
   /**
