@@ -44,7 +44,8 @@ export function scorePlotSvg(series: ReadonlyArray<PlotSeries>, options: PlotOpt
   const finite = series.flatMap((s) => s.points).filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y));
   const xs = finite.map(([x]) => x);
   const ys = finite.map(([, y]) => y);
-  let [x0, x1] = xs.length ? [Math.min(...xs), Math.max(...xs)] : [0, 1];
+  const x0 = xs.length ? Math.min(...xs) : 0;
+  let x1 = xs.length ? Math.max(...xs) : 1;
   let [y0, y1] = ys.length ? [Math.min(...ys, 0), Math.max(...ys, 0)] : [-1, 1];
   if (x1 === x0) x1 = x0 + 1;
   if (y1 === y0) {
