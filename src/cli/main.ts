@@ -7,6 +7,7 @@ import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
 import { addDrawCommand } from './draw.js';
+import { addReportCommand } from './report.js';
 import { TOOL_VERSION } from '../version.js';
 
 /** What a command's action returns: the process's exit status. */
@@ -28,6 +29,7 @@ export function buildProgram(outcome: CommandOutcome): Command {
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   addInvariantsCommand(program, outcome);
   addDrawCommand(program, outcome);
+  addReportCommand(program, outcome);
   return program;
 }
 
