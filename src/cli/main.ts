@@ -8,6 +8,7 @@ import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
 import { addDrawCommand } from './draw.js';
 import { addReportCommand } from './report.js';
+import { addPolishCommand } from './polish.js';
 import { TOOL_VERSION } from '../version.js';
 
 /** What a command's action returns: the process's exit status. */
@@ -30,6 +31,7 @@ export function buildProgram(outcome: CommandOutcome): Command {
   addInvariantsCommand(program, outcome);
   addDrawCommand(program, outcome);
   addReportCommand(program, outcome);
+  addPolishCommand(program, outcome);
   return program;
 }
 
