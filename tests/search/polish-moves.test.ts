@@ -28,6 +28,7 @@ import { randomRewire, rewireNeighbourhood } from '../../src/search/polish/moves
 import { ROTATE_EDGE, rotateEdge } from '../../src/search/polish/moves/rotate-edge.js';
 import { SUBDIVIDE_EDGE } from '../../src/search/polish/moves/subdivide-edge.js';
 import { TOGGLE_PAIR, togglePair } from '../../src/search/polish/moves/toggle-pair.js';
+import { randomSpanningTree } from '../../src/search/polish/random-spanning-tree.js';
 import { randomGraph, seededRng } from '../support/random-graph.js';
 
 type Edge = readonly [number, number];
@@ -313,6 +314,22 @@ describe('connectivity', () => {
         expect(Math.abs(h!.size - g.size)).toBeLessThanOrEqual(1);
       }),
       { numRuns: 100, seed: 12 },
+    );
+  });
+});
+
+describe('randomSpanningTree()', () => {
+  test('is a tree on all vertices (registry isTree), using only edges of g when g is connected', () => {
+    fc.assert(
+      fc.property(arbitraryGraph, fc.integer({ min: 0, max: 1000 }), (g, s) => {
+        const t = randomSpanningTree(g, seededRng(`tree-${s}`));
+        expect(t.order).toBe(g.order);
+        expect(computeInvariant(t, 'isTree')).toBe(true);
+        if (computeInvariant(g, 'isConnected')) {
+          for (const [u, v] of edgeList(t)) expect(hasEdge(g, u, v)).toBe(true);
+        }
+      }),
+      { numRuns: 100, seed: 14 },
     );
   });
 });

@@ -1,0 +1,141 @@
+/**
+ * How often and how fast the polisher alone refutes false claims from random starts, against
+ * random sampling with the same budget: `npm run bench -- polish`.
+ *
+ * The claims are scenarios of our own, each false with counterexamples of a different shape:
+ * stars (spectral gap), complete bipartite graphs (energy against edges), long paths (Wiener
+ * index), two dense halves joined thinly (second eigenvalue), near-complete graphs (triangles
+ * against edges: t <= (sqrt 2 / 3) m^(3/2) is a theorem, tight for cliques, and 0.4 < sqrt 2 / 3
+ * makes K_11 and K_12 counterexamples). Each start is a seeded G(n, 0.3);
+ * each run gets `BUDGET` scored graphs. Reported per claim: runs that refuted, and the medians
+ * (over refuting runs) of graphs scored and milliseconds until the first positive score.
+ */
+import seedrandom from 'seedrandom';
+import { defineConjecture } from '../../src/conjecture/define.js';
+import { evaluateConjecture } from '../../src/conjecture/evaluate.js';
+import { type Conjecture, type Evaluation } from '../../src/conjecture/types.js';
+import { type Graph } from '../../src/graph/graph.js';
+import { polishGraph, POLISH_DEFAULTS } from '../../src/search/polish/vns.js';
+import { polishStream } from '../../src/search/polish/polish-graphs.js';
+import { randomGraph } from '../support/random-graph.js';
+import { row } from './timing.js';
+
+const BUDGET = 3000;
+const RUNS = 10;
+
+const CLAIMS: readonly Conjecture[] = [
+  defineConjecture({
+    name: 'triangle-free-spectral-gap',
+    statement: 'For connected triangle-free G: spectralRadius <= averageDegree + 1',
+    vertices: 12,
+    connected: true,
+    where: (g) => g.triangleCount === 0,
+    score: (g) => g.spectralRadius - g.averageDegree - 1,
+  }),
+  defineConjecture({
+    name: 'energy-above-edges',
+    statement: 'For connected G: energy >= 2 sqrt(size) + 1/2',
+    vertices: 12,
+    connected: true,
+    score: (g) => 2 * Math.sqrt(g.size) + 0.5 - g.energy,
+  }),
+  defineConjecture({
+    name: 'wiener-cubic',
+    statement: 'For connected G: wienerIndex <= order^3 / 8',
+    vertices: 14,
+    connected: true,
+    score: (g) => g.wienerIndex - g.order ** 3 / 8,
+  }),
+  defineConjecture({
+    name: 'second-eigenvalue-half',
+    statement: 'For connected G: secondLargestEigenvalue <= order/2 - 1.5',
+    vertices: 12,
+    connected: true,
+    score: (g) => g.secondLargestEigenvalue - g.order / 2 + 1.5,
+  }),
+  defineConjecture({
+    name: 'triangles-against-edges',
+    statement: 'For connected G: triangleCount <= 0.4 size^(3/2)',
+    vertices: 12,
+    connected: true,
+    score: (g) => g.triangleCount - 0.4 * g.size ** 1.5,
+  }),
+];
+
+interface RunResult {
+  readonly refuted: boolean;
+  readonly scored: number;
+  readonly ms: number;
+}
+
+/** evaluate wrapped to note when (graphs scored, ms) the first positive in-domain score appears. */
+function watched(c: Conjecture): { evaluate: (g: Graph) => Evaluation; first: () => RunResult } {
+  let count = 0;
+  let hit: RunResult | undefined;
+  const t0 = performance.now();
+  return {
+    evaluate: (g) => {
+      const ev = evaluateConjecture(c, g);
+      count++;
+      if (hit === undefined && ev.inDomain && ev.score > 0) {
+        hit = { refuted: true, scored: count, ms: performance.now() - t0 };
+      }
+      return ev;
+    },
+    first: () => hit ?? { refuted: false, scored: count, ms: performance.now() - t0 },
+  };
+}
+
+function polishRun(c: Conjecture, seed: number): RunResult {
+  const start = randomGraph(c.vertices, 0.3, seedrandom(`bench-start-${seed}`));
+  const w = watched(c);
+  polishGraph(w.evaluate, start, polishStream(`bench-${seed}`, 0), {
+    ...POLISH_DEFAULTS,
+    steps: BUDGET,
+    fixedOrder: true,
+    connected: c.connected,
+  });
+  return w.first();
+}
+
+/** The baseline: BUDGET independent G(n, p) graphs, p uniform in (0, 1) per graph. */
+function samplingRun(c: Conjecture, seed: number): RunResult {
+  const rng = seedrandom(`bench-sample-${seed}`);
+  const w = watched(c);
+  for (let i = 0; i < BUDGET && !w.first().refuted; i++) w.evaluate(randomGraph(c.vertices, rng(), rng));
+  return w.first();
+}
+
+function median(xs: number[]): number {
+  if (xs.length === 0) return NaN;
+  const s = [...xs].sort((a, b) => a - b);
+  const mid = s.length >> 1;
+  return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
+}
+
+export default async function polishBench(): Promise<void> {
+  console.log(
+    `polish from G(n, 0.3) vs random G(n, p) sampling; ${RUNS} seeds, ${BUDGET} scored graphs per run`,
+  );
+  const widths = [28, 4, 10, 12, 10, 10, 12, 10];
+  console.log(
+    row(['claim', 'n', 'polish', 'med scored', 'med ms', 'sampling', 'med scored', 'med ms'], widths),
+  );
+  for (const c of CLAIMS) {
+    const polish: RunResult[] = [];
+    const sampling: RunResult[] = [];
+    for (let s = 0; s < RUNS; s++) {
+      polish.push(polishRun(c, s));
+      sampling.push(samplingRun(c, s));
+    }
+    const stats = (rs: RunResult[]): Array<string | number> => {
+      const hits = rs.filter((r) => r.refuted);
+      return [
+        `${hits.length}/${rs.length}`,
+        hits.length ? median(hits.map((r) => r.scored)) : '-',
+        hits.length ? median(hits.map((r) => r.ms)).toFixed(1) : '-',
+      ];
+    };
+    console.log(row([c.name, c.vertices, ...stats(polish), ...stats(sampling)], widths));
+  }
+}
