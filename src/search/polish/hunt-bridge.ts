@@ -1,0 +1,121 @@
+/**
+ * What the hunt needs to polish inside its loop (`--polish-every K`): when a polish is due, the
+ * polishing of the batch's best distinct graphs at the hunt's order, the improved graphs as
+ * edge decisions (graph6 pair order, the order in which the policy decides edges) so they can
+ * join the carried pool and the elite, and the finds at other orders as near-miss records for
+ * summary.json. Order-changing finds never come back as decisions: a fixed-order hunt's pool
+ * holds graphs of its order only.
+ */
+import { type Graph, hasEdge } from '../../graph/graph.js';
+import { encodeGraph6 } from '../../graph/graph6.js';
+import { polishGraphs } from './polish-graphs.js';
+import { refutationOf, type Refutation } from './verdict.js';
+import { type Evaluate, type ScoredGraph } from './vns.js';
+
+/** How the hunt polishes. */
+export interface HuntPolishSettings {
+  /** Polish after every `every`-th iteration (0: never). */
+  readonly every: number;
+  /** How many of the batch's best distinct in-domain graphs to polish. */
+  readonly graphs: number;
+  /** Graphs scored per polished graph. */
+  readonly steps: number;
+}
+
+export const HUNT_POLISH_DEFAULTS: HuntPolishSettings = Object.freeze({ every: 5, graphs: 4, steps: 300 });
+
+/** Whether iteration t (0-based) ends with a polish. */
+export function polishDue(iteration: number, every: number): boolean {
+  return every > 0 && (iteration + 1) % every === 0;
+}
+
+/** The graph's pairs in graph6 order (01, 02, 12, 03, ...), 1 for an edge: the inverse of fromUpperTriangleBits. */
+export function upperTriangleBits(g: Graph): Uint8Array {
+  const bits = new Uint8Array((g.order * (g.order - 1)) / 2);
+  let k = 0;
+  for (let j = 1; j < g.order; j++) for (let i = 0; i < j; i++, k++) bits[k] = hasEdge(g, i, j) ? 1 : 0;
+  return bits;
+}
+
+/** A polished graph the hunt can take back: at its order and strictly better than where it started. */
+export interface ImprovedGraph {
+  readonly graph: Graph;
+  readonly bits: Uint8Array;
+  readonly score: number;
+  /** Index of the start graph it came from. */
+  readonly from: number;
+}
+
+export interface HuntPolishResult {
+  readonly improved: readonly ImprovedGraph[];
+  /** Best graph found at each other order, by increasing order. */
+  readonly nearMisses: readonly ScoredGraph[];
+  /** Graphs scored in all. */
+  readonly evaluations: number;
+}
+
+/**
+ * Polishes `starts` (graphs of the hunt's order, best first) in fixed-order mode with the stream
+ * keyed by (seed, iteration), so a resumed hunt polishes exactly as an uninterrupted one.
+ */
+export function polishForHunt(
+  evaluate: Evaluate,
+  starts: readonly Graph[],
+  startScores: readonly number[],
+  seed: string,
+  iteration: number,
+  settings: HuntPolishSettings,
+  connected: boolean,
+): HuntPolishResult {
+  const batch = polishGraphs(evaluate, starts, {
+    seed: `${seed}/hunt-polish/${iteration}`,
+    steps: settings.steps,
+    fixedOrder: true,
+    connected,
+  });
+  const improved: ImprovedGraph[] = [];
+  let evaluations = 0;
+  batch.outcomes.forEach((o, i) => {
+    evaluations += o.evaluations;
+    if (o.best !== undefined && o.best.score > startScores[i]) {
+      improved.push({
+        graph: o.best.graph,
+        bits: upperTriangleBits(o.best.graph),
+        score: o.best.score,
+        from: i,
+      });
+    }
+  });
+  return { improved, nearMisses: batch.otherOrders, evaluations };
+}
+
+/** A near miss at another order as summary.json records it. */
+export interface NearMissRecord {
+  readonly graph6: string;
+  readonly order: number;
+  /** "n+1", "n-1", ...: where it stands relative to the hunt's order. */
+  readonly offset: string;
+  readonly score: number | string;
+  readonly refutes: Refutation;
+}
+
+export function nearMissRecord(s: ScoredGraph, huntOrder: number): NearMissRecord {
+  const d = s.graph.order - huntOrder;
+  return {
+    graph6: encodeGraph6(s.graph),
+    order: s.graph.order,
+    offset: `n${d >= 0 ? '+' : '-'}${Math.abs(d)}`,
+    score: Number.isFinite(s.score) ? s.score : String(s.score),
+    refutes: refutationOf(s.score),
+  };
+}
+
+/** Merges near misses: the best per order, by increasing order. */
+export function mergeNearMisses(held: readonly ScoredGraph[], found: readonly ScoredGraph[]): ScoredGraph[] {
+  const byOrder = new Map<number, ScoredGraph>();
+  for (const s of [...held, ...found]) {
+    const h = byOrder.get(s.graph.order);
+    if (h === undefined || s.score > h.score) byOrder.set(s.graph.order, s);
+  }
+  return [...byOrder.entries()].sort((a, b) => a[0] - b[0]).map(([, s]) => s);
+}

@@ -1,0 +1,155 @@
+/**
+ * The hunt's side of the polisher: decisions in graph6 pair order (checked against the builder
+ * fromUpperTriangleBits), when a polish is due, improved graphs at the hunt's order only, and
+ * near-miss records for the other orders.
+ */
+import fc from 'fast-check';
+import { describe, expect, test } from 'vitest';
+import { fromEdges, fromUpperTriangleBits } from '../../src/graph/builders.js';
+import { star } from '../../src/graph/families.js';
+import { decodeGraph6, encodeGraph6 } from '../../src/graph/graph6.js';
+import { type Graph, graphsEqual } from '../../src/graph/graph.js';
+import { defineConjecture } from '../../src/conjecture/define.js';
+import { evaluateConjecture } from '../../src/conjecture/evaluate.js';
+import {
+  mergeNearMisses,
+  nearMissRecord,
+  polishDue,
+  polishForHunt,
+  upperTriangleBits,
+} from '../../src/search/polish/hunt-bridge.js';
+import { randomGraph, seededRng } from '../support/random-graph.js';
+
+const GAP = defineConjecture({
+  name: 'triangle-free-spectral-gap',
+  statement: 'For connected triangle-free G: spectralRadius <= averageDegree + 1',
+  vertices: 10,
+  connected: true,
+  where: (g) => g.triangleCount === 0,
+  score: (g) => g.spectralRadius - g.averageDegree - 1,
+});
+const evaluate = (g: Graph) => evaluateConjecture(GAP, g);
+const scoreOf = (g: Graph): number => {
+  const ev = evaluate(g);
+  return ev.inDomain ? ev.score : -Infinity;
+};
+
+// Centre 0, leaves 4, 5, 6, legs 0-1-7, 0-2-8, 0-3-9 (three leaf moves from K_{1,9}).
+const SPIDER = fromEdges(10, [
+  [0, 1],
+  [0, 2],
+  [0, 3],
+  [0, 4],
+  [0, 5],
+  [0, 6],
+  [1, 7],
+  [2, 8],
+  [3, 9],
+]);
+
+describe('upperTriangleBits()', () => {
+  test('is the inverse of fromUpperTriangleBits', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 40 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.nat(),
+        (n, p, s) => {
+          const g = randomGraph(n, p, seededRng(`bits-${s}`));
+          expect(graphsEqual(fromUpperTriangleBits(n, upperTriangleBits(g)), g)).toBe(true);
+        },
+      ),
+      { numRuns: 100, seed: 21 },
+    );
+  });
+  test('follows graph6 pair order 01, 02, 12, 03, ...', () => {
+    // The path 0-1-2-3 has pairs 01, 12, 23: positions 0, 2 and 5.
+    expect([
+      ...upperTriangleBits(
+        fromEdges(4, [
+          [0, 1],
+          [1, 2],
+          [2, 3],
+        ]),
+      ),
+    ]).toEqual([1, 0, 1, 0, 0, 1]);
+  });
+});
+
+describe('polishDue()', () => {
+  test('every K-th iteration, never with K = 0', () => {
+    expect([...Array(12).keys()].filter((t) => polishDue(t, 5))).toEqual([4, 9]);
+    expect([...Array(12).keys()].filter((t) => polishDue(t, 0))).toEqual([]);
+  });
+});
+
+describe('polishForHunt()', () => {
+  const settings = { every: 1, graphs: 2, steps: 120 };
+  const starts = [SPIDER, star(10)];
+  const run = (iteration: number) =>
+    polishForHunt(evaluate, starts, starts.map(scoreOf), 'hunt-seed', iteration, settings, true);
+
+  test('improved graphs are at the hunt order, strictly better, and their decisions decode to them', () => {
+    const r = run(3);
+    expect(r.improved.length).toBeGreaterThan(0);
+    for (const imp of r.improved) {
+      expect(imp.graph.order).toBe(10);
+      expect(imp.score).toBeGreaterThan(scoreOf(starts[imp.from]));
+      expect(scoreOf(imp.graph)).toBe(imp.score);
+      expect(graphsEqual(fromUpperTriangleBits(10, imp.bits), imp.graph)).toBe(true);
+    }
+    // The spider polishes into a counterexample (see polish-search.test.ts).
+    expect(r.improved.some((imp) => imp.from === 0 && imp.score > 0)).toBe(true);
+    for (const s of r.nearMisses) expect(s.graph.order).not.toBe(10);
+    expect(r.evaluations).toBeLessThanOrEqual(2 * 120);
+  });
+
+  test('depends on (seed, iteration) only: the same iteration repeats, another differs', () => {
+    const key = (r: ReturnType<typeof run>) => [
+      r.evaluations,
+      ...r.improved.map((i) => encodeGraph6(i.graph)),
+      ...r.nearMisses.map((s) => encodeGraph6(s.graph)),
+    ];
+    expect(key(run(3))).toEqual(key(run(3)));
+    const traces = [3, 4].map((t) => {
+      const seen: string[] = [];
+      polishForHunt(
+        (g) => (seen.push(encodeGraph6(g)), evaluate(g)),
+        starts,
+        starts.map(scoreOf),
+        'hunt-seed',
+        t,
+        settings,
+        true,
+      );
+      return seen;
+    });
+    expect(traces[1]).not.toEqual(traces[0]);
+  });
+});
+
+describe('near misses', () => {
+  test('nearMissRecord() names the order offset and the refutation', () => {
+    const g = star(11);
+    const rec = nearMissRecord({ graph: g, score: 0.25 }, 10);
+    expect(rec).toEqual({
+      graph6: encodeGraph6(g),
+      order: 11,
+      offset: 'n+1',
+      score: 0.25,
+      refutes: 'numerical',
+    });
+    expect(graphsEqual(decodeGraph6(rec.graph6), g)).toBe(true);
+    expect(nearMissRecord({ graph: star(8), score: -Infinity }, 10)).toMatchObject({
+      offset: 'n-2',
+      score: '-Infinity',
+      refutes: 'none',
+    });
+  });
+  test('mergeNearMisses() keeps the best per order, by increasing order', () => {
+    const a = { graph: star(9), score: 0.1 };
+    const b = { graph: star(11), score: 0.3 };
+    const c = { graph: star(9), score: 0.2 };
+    expect(mergeNearMisses([a, b], [c])).toEqual([c, b]);
+  });
+});
