@@ -9,6 +9,7 @@ import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
 import { fromEdges } from '../../src/graph/builders.js';
 import { cycle, path, star } from '../../src/graph/families.js';
+import { encodeGraph6 } from '../../src/graph/graph6.js';
 import { edgeList, type Graph, graphsEqual, hasEdge, wordsForOrder } from '../../src/graph/graph.js';
 import { computeInvariant } from '../../src/invariants/registry.js';
 import { ALL_FAMILIES } from '../../src/search/polish/catalogue.js';
@@ -147,6 +148,15 @@ const arbitraryGraph = fc
   })
   .map(({ n, p, seed }) => randomGraph(n, n > 14 ? Math.min(p, 0.25) : p, seededRng(`moves-${seed}`)));
 
+/** Random graphs on 1..12 vertices, for checks that list whole neighbourhoods. */
+const arbitrarySmallGraph = fc
+  .record({
+    n: fc.integer({ min: 1, max: 12 }),
+    p: fc.double({ min: 0, max: 1, noNaN: true }),
+    seed: fc.integer({ min: 0, max: 1_000_000 }),
+  })
+  .map(({ n, p, seed }) => randomGraph(n, p, seededRng(`small-${seed}`)));
+
 /** A random connected graph: a random tree (each vertex joins an earlier one) plus random edges. */
 const arbitraryConnectedGraph = fc
   .record({
@@ -189,6 +199,27 @@ describe('move families', () => {
           }
         }),
         { numRuns: 40, seed: 6 },
+      );
+    });
+  }
+
+  for (const f of ALL_FAMILIES.filter((x) => x.sample !== undefined)) {
+    test(`${f.name}: sample() reaches only graphs that candidates() reaches, and none when it lists none`, () => {
+      fc.assert(
+        fc.property(arbitrarySmallGraph, fc.nat(), (g, s) => {
+          // Compared by the graphs reached: a sampled swap may name its edges in another orientation.
+          const listed = new Set(f.candidates(g).map((m) => encodeGraph6(f.apply(g, m))));
+          const rng = seededRng(`sample-${s}`);
+          let found = 0;
+          for (let i = 0; i < 20; i++) {
+            const m = f.sample!(g, rng);
+            if (m === undefined) continue;
+            found++;
+            expect(listed.has(encodeGraph6(f.apply(g, m))), `${f.name} ${m.join(',')}`).toBe(true);
+          }
+          if (listed.size === 0) expect(found).toBe(0);
+        }),
+        { numRuns: 60, seed: 15 },
       );
     });
   }

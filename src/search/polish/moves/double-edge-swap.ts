@@ -7,7 +7,8 @@
  */
 import { graphFromRows } from '../../../graph/builders.js';
 import { type Graph, edgeList, hasEdge } from '../../../graph/graph.js';
-import { type Move, type MoveFamily } from './move-family.js';
+import { type Move, type MoveFamily, SAMPLE_ATTEMPTS } from './move-family.js';
+import { randomOrientedEdge } from './random-edge.js';
 import { addPair, copyRows, removePair } from './rows.js';
 
 /** g with the edges ab, cd replaced by ac, bd. */
@@ -51,4 +52,17 @@ export const DOUBLE_EDGE_SWAP: MoveFamily = {
     return out;
   },
   apply: (g, [a, b, c, d]) => swapEdges(g, a, b, c, d),
+  sample(g: Graph, rng: () => number): Move | undefined {
+    for (let attempt = 0; attempt < SAMPLE_ATTEMPTS; attempt++) {
+      const e1 = randomOrientedEdge(g, rng);
+      const e2 = randomOrientedEdge(g, rng);
+      if (e1 === undefined || e2 === undefined) return undefined;
+      const [a, b] = e1;
+      const [c, d] = e2;
+      // Random orientations make both rewirings of the pair reachable.
+      if (a === c || a === d || b === c || b === d) continue;
+      if (!hasEdge(g, a, c) && !hasEdge(g, b, d)) return [a, b, c, d];
+    }
+    return undefined;
+  },
 };

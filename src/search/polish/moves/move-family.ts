@@ -18,4 +18,12 @@ export interface MoveFamily {
   candidates(g: Graph): Move[];
   /** The graph reached by one move from candidates(g). */
   apply(g: Graph, move: Move): Graph;
+  /**
+   * A random applicable move (undefined when none was found), drawn without listing them all:
+   * what the sampled descent uses for the large neighbourhoods. Not necessarily uniform.
+   */
+  sample?(g: Graph, rng: () => number): Move | undefined;
 }
+
+/** Draws before a sampler gives up (a random pick is rejected when it names no valid move). */
+export const SAMPLE_ATTEMPTS = 32;

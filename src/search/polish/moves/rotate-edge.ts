@@ -5,7 +5,8 @@
  */
 import { graphFromRows } from '../../../graph/builders.js';
 import { type Graph, hasEdge, neighbors } from '../../../graph/graph.js';
-import { type Move, type MoveFamily } from './move-family.js';
+import { type Move, type MoveFamily, SAMPLE_ATTEMPTS } from './move-family.js';
+import { randomOrientedEdge } from './random-edge.js';
 import { addPair, copyRows, removePair } from './rows.js';
 
 /** g with the edge uv replaced by uw (uv an edge, uw not, w != u). */
@@ -37,4 +38,14 @@ export const ROTATE_EDGE: MoveFamily = {
     return out;
   },
   apply: (g, [u, v, w]) => rotateEdge(g, u, v, w),
+  sample(g: Graph, rng: () => number): Move | undefined {
+    for (let attempt = 0; attempt < SAMPLE_ATTEMPTS; attempt++) {
+      const e = randomOrientedEdge(g, rng);
+      if (e === undefined) return undefined;
+      const [u, v] = e;
+      const w = Math.floor(rng() * g.order);
+      if (w !== u && !hasEdge(g, u, w)) return [u, v, w];
+    }
+    return undefined;
+  },
 };

@@ -26,4 +26,10 @@ export const TOGGLE_PAIR: MoveFamily = {
     return out;
   },
   apply: (g, [u, v]) => togglePair(g, u, v),
+  sample(g: Graph, rng: () => number): Move | undefined {
+    if (g.order < 2) return undefined;
+    const u = Math.floor(rng() * g.order);
+    const v = (u + 1 + Math.floor(rng() * (g.order - 1))) % g.order;
+    return u < v ? [u, v] : [v, u];
+  },
 };
