@@ -75,7 +75,7 @@ export interface PolishSettings {
 }
 
 export const POLISH_DEFAULTS: PolishSettings = Object.freeze({
-  steps: 2000,
+  steps: 10000,
   fixedOrder: false,
   connected: false,
   orderSlack: 3,
