@@ -112,6 +112,27 @@ class Tally {
   }
 }
 
+/** Output held back (finite input) or written as it comes (a stream), with back-pressure. */
+class OutputBuffer {
+  private pending: string[] = [];
+
+  constructor(private readonly holdBack: boolean) {}
+
+  add(text: string): void {
+    this.pending.push(text);
+  }
+
+  async flushIfStreaming(): Promise<void> {
+    if (!this.holdBack) await this.flush();
+  }
+
+  async flush(): Promise<void> {
+    const text = this.pending.join('');
+    this.pending = [];
+    if (text !== '') await writeOut(text);
+  }
+}
+
 export function addCheckCommand(program: Command, outcome: CommandOutcome): void {
   program
     .command('check')
@@ -149,9 +170,11 @@ Example:
         opts.conjecture === undefined ? loaded.conjectures : [selectConjecture(loaded, opts.conjecture)];
       const tallies = conjectures.map(() => new Tally());
       const withName = conjectures.length > 1;
-      if (!opts.json) {
-        await writeOut(conjectures.map((c) => `${c.name}: ${c.statement}\n`).join(''));
-      }
+      // Without --stdin the input is finite and small: the whole output is held back until every
+      // graph has been evaluated, so that bad input leaves stdout empty. A stream is written as it
+      // goes (constant memory); an error then stops it after the last complete line.
+      const output = new OutputBuffer(opts.stdin !== true);
+      if (!opts.json) output.add(conjectures.map((c) => `${c.name}: ${c.statement}\n`).join(''));
       for await (const candidate of candidates(graphs, opts, maxVertices)) {
         const view = createGraphView(candidate.graph);
         let text = '';
@@ -175,9 +198,11 @@ Example:
             text += `${withName ? c.name + '  ' : ''}${candidate.graph6.padEnd(12)} ${shownScore.padStart(14)}  ${describeVerdict(verdict).padEnd(19)}  ${candidate.source}\n`;
           }
         });
-        await writeOut(text);
+        output.add(text);
+        await output.flushIfStreaming();
       }
-      if (!opts.json) await writeOut(tallies.map((t, i) => t.summary(conjectures[i])).join(''));
+      if (!opts.json) output.add(tallies.map((t, i) => t.summary(conjectures[i])).join(''));
+      await output.flush();
       const refutations = tallies.reduce((sum, t) => sum + t.counts.refutes, 0);
       outcome.status = checkExitStatus(refutations);
     });
