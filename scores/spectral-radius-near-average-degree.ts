@@ -10,7 +10,8 @@
  *
  *   refute check scores/spectral-radius-near-average-degree.ts --families
  *
- * finds it among the built-in families on 9 vertices (the star, and a lollipop and a broom).
+ * finds it among the built-in families on 9 vertices: the star K_{1,8} and the lollipop(6,3)
+ * (K6 with a path of 3 vertices hung from it); more stars, lollipops and brooms follow.
  * A scenario of our own invention, written as an example of a conjecture file.
  */
 import { defineConjecture } from 'refute';

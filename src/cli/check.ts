@@ -98,7 +98,7 @@ class Tally {
     const k = this.counts;
     const total = k.refutes + k.holds + k.tight + k['outside-domain'];
     const parts = [
-      `${k.refutes} refute${k.refutes === 1 ? 's' : ''} it (numerical, not yet certified)`,
+      `${k.refutes} refute${k.refutes === 1 ? 's' : ''} it${k.refutes > 0 ? ' (numerical, not yet certified)' : ''}`,
       `${k.holds} hold`,
       `${k.tight} tight`,
       `${k['outside-domain']} outside the domain`,
@@ -195,7 +195,7 @@ Example:
               }) + '\n';
           } else {
             const shownScore = score === undefined ? '-' : formatNumber(score);
-            text += `${withName ? c.name + '  ' : ''}${candidate.graph6.padEnd(12)} ${shownScore.padStart(14)}  ${describeVerdict(verdict).padEnd(19)}  ${candidate.source}\n`;
+            text += `${withName ? c.name + '  ' : ''}${candidate.graph6.padEnd(12)} ${shownScore.padStart(16)}  ${describeVerdict(verdict).padEnd(19)}  ${candidate.source}\n`;
           }
         });
         output.add(text);

@@ -20,7 +20,7 @@ import { createRequire, SourceMap } from 'node:module';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import vm from 'node:vm';
-import { build, type Message } from 'esbuild';
+import type { Message } from 'esbuild';
 import { ConjectureFieldError, ConjectureFileError } from './errors.js';
 import { validateConjecture } from './define.js';
 import { registerLocator } from './source-locations.js';
@@ -80,6 +80,9 @@ async function bundle(source: string, absolute: string, shown: string): Promise<
     throw new ConjectureFileError(shown, 'a conjecture file must end in .ts (or .mts, .js, .mjs)');
   }
   const dir = path.dirname(absolute);
+  // Imported here, not at the top: esbuild's module costs ~0.1 s, which commands that load no
+  // conjecture file (invariants, draw, --help) should not pay.
+  const { build } = await import('esbuild');
   try {
     const result = await build({
       stdin: { contents: source, loader, resolveDir: dir, sourcefile: absolute },

@@ -1,28 +1,19 @@
 /**
- * `refute check` end to end: the CLI run from source in a child process, one run per exit
- * status and per input mode.
+ * `refute check` end to end: the compiled CLI in a child process (tests/support/run-cli.ts), one
+ * run per exit status and per input mode.
  */
 import { afterAll, describe, expect, it } from 'vitest';
-import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { scratchFolder } from '../conjecture/conjecture-files.js';
+import { runCli, type CliResult } from '../support/run-cli.js';
 
 const root = path.resolve(import.meta.dirname, '../..');
 const scratch = scratchFolder();
 afterAll(() => scratch.remove());
 
-function refute(args: string[], input?: string): { status: number | null; stdout: string; stderr: string } {
-  const r = spawnSync(
-    process.execPath,
-    ['--import', 'tsx', path.join(root, 'tests/cli/refute-from-source.ts'), ...args],
-    {
-      cwd: root,
-      input,
-      encoding: 'utf8',
-    },
-  );
-  return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+function refute(args: string[], stdin?: string): Promise<CliResult> {
+  return runCli(args, { cwd: root, stdin });
 }
 
 // Every graph on 6 vertices: the atlas lines whose first byte is N(6) = 6 + 63 = 'E'.
@@ -41,13 +32,13 @@ export default [
 );
 
 describe('refute check', () => {
-  it('streams every graph on 6 vertices and finds exactly the known counterexamples (exit 0)', () => {
+  it('streams every graph on 6 vertices and finds exactly the known counterexamples (exit 0)', async () => {
     // A000088(6) = 156 graphs on 6 vertices (OEIS), of which A001349(6) = 112 are connected:
     // 44 refute "always connected". A graph on n vertices with a vertex of degree n-1 is the
     // cone over any graph on n-1 vertices, one per isomorphism class: A000088(5) = 34 refute
     // "no dominating vertex".
     expect(sixVertexGraphs.length).toBe(156);
-    const r = refute(['check', TWO_CLAIMS, '--stdin', '--json'], sixVertexGraphs.join('\n') + '\n');
+    const r = await refute(['check', TWO_CLAIMS, '--stdin', '--json'], sixVertexGraphs.join('\n') + '\n');
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     const records = r.stdout
@@ -72,9 +63,9 @@ describe('refute check', () => {
     expect(records[0].source).toBe('stdin line 1');
   });
 
-  it('prints a line per graph and a summary, and checks one conjecture of a file with --conjecture', () => {
+  it('prints a line per graph and a summary, and checks one conjecture of a file with --conjecture', async () => {
     // C5 ('Dhc') is connected with maximum degree 2; the empty graph on 3 vertices ('B?') is not connected.
-    const r = refute(['check', TWO_CLAIMS, 'Dhc', 'B?', '--conjecture', 'always-connected']);
+    const r = await refute(['check', TWO_CLAIMS, 'Dhc', 'B?', '--conjecture', 'always-connected']);
     expect(r.status).toBe(0);
     const lines = r.stdout.trim().split('\n');
     expect(lines[0]).toBe('always-connected: Every graph is connected');
@@ -85,11 +76,11 @@ describe('refute check', () => {
     );
   });
 
-  it('--families refutes the first example at once (exit 0) and finds nothing against the true theorem (exit 1)', () => {
-    const refuted = refute(['check', 'scores/spectral-radius-near-average-degree.ts', '--families']);
+  it('--families refutes the first example at once (exit 0) and finds nothing against the true theorem (exit 1)', async () => {
+    const refuted = await refute(['check', 'scores/spectral-radius-near-average-degree.ts', '--families']);
     expect(refuted.status).toBe(0);
     expect(refuted.stdout).toMatch(/first counterexample \S+ \(\w+\(9(,\d+)?\)\)\n$/);
-    const theorem = refute([
+    const theorem = await refute([
       'check',
       'scores/hong-spectral-radius-bound.ts',
       '--families',
@@ -107,8 +98,8 @@ describe('refute check', () => {
     expect(verdicts).toContain('tight');
   });
 
-  it('--families finds nothing against the hunt demo (exit 1)', () => {
-    const r = refute([
+  it('--families finds nothing against the hunt demo (exit 1)', async () => {
+    const r = await refute([
       'check',
       'scores/second-eigenvalue-vs-matching.ts',
       '--families',
@@ -116,7 +107,7 @@ describe('refute check', () => {
       '14',
     ]);
     expect(r.status).toBe(1);
-    expect(r.stdout).toMatch(/: \d+ graphs: 0 refute it .*; best score -\S+ on /);
+    expect(r.stdout).toMatch(/: \d+ graphs: 0 refute it, .*; best score -\S+ on /);
   });
 
   it.each([
@@ -141,19 +132,19 @@ describe('refute check', () => {
       ['check', TWO_CLAIMS, 'Dhc', '--conjecture', 'always-conected'],
       `refute: ${TWO_CLAIMS}: has no conjecture 'always-conected'; did you mean 'always-connected'?`,
     ],
-  ])('exits 2 with a one-line message on bad input: %j', (args, message) => {
-    const r = refute(args);
+  ])('exits 2 with a one-line message on bad input: %j', async (args, message) => {
+    const r = await refute(args);
     expect(r.status).toBe(2);
     expect(r.stdout).toBe('');
     expect(r.stderr.startsWith(message)).toBe(true);
     expect(r.stderr.trim().split('\n').length).toBe(1);
   });
 
-  it('exits 2 on an unknown option, a syntax error and a NaN score, saying where', () => {
-    expect(refute(['check', TWO_CLAIMS, '--familes']).status).toBe(2);
+  it('exits 2 on an unknown option, a syntax error and a NaN score, saying where', async () => {
+    expect((await refute(['check', TWO_CLAIMS, '--familes'])).status).toBe(2);
     const line2 = "export default defineConjecture({ name: 'b', score: (g) => g.n +* 1 });";
     const broken = scratch.write('broken.ts', `import { defineConjecture } from 'refute';\n${line2}\n`);
-    const syntax = refute(['check', broken, 'Dhc']);
+    const syntax = await refute(['check', broken, 'Dhc']);
     expect(syntax.status).toBe(2);
     expect(syntax.stderr).toBe(
       `refute: ${broken}:2:${line2.indexOf('*') + 1}: syntax error: Unexpected "*"\n`,
@@ -162,7 +153,7 @@ describe('refute check', () => {
       'nan.ts',
       "import { defineConjecture } from 'refute';\nexport default defineConjecture({ name: 'ratio', statement: 's', vertices: 5, score: (g) => (g.m - 5) / (g.n - 5) });\n",
     );
-    const r = refute(['check', nan, 'Dhc']);
+    const r = await refute(['check', nan, 'Dhc']);
     expect(r.status).toBe(2);
     // C5: m = n = 5, so the score is 0/0.
     expect(r.stderr).toMatch(
