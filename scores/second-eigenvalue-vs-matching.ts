@@ -26,5 +26,6 @@ export default defineConjecture({
   statement: 'For every connected graph G: secondLargestEigenvalue(G) <= matchingNumber(G)',
   vertices: 14,
   connected: true,
+  where: (g) => g.n >= 2, // λ2 needs two eigenvalues
   score: (g) => g.secondLargestEigenvalue - g.matchingNumber,
 });

@@ -7,7 +7,7 @@
  */
 import { type Graph } from '../graph/graph.js';
 import { encodeGraph6 } from '../graph/graph6.js';
-import { InputError } from '../errors.js';
+import { InputError, InvariantDomainError } from '../errors.js';
 import { ScoreEvaluationError, UnknownInvariantError } from './errors.js';
 import { locateError } from './source-locations.js';
 import { type Conjecture, type Evaluation, type GraphView } from './types.js';
@@ -37,7 +37,11 @@ function failure(c: Conjecture, g: Graph, part: 'score' | 'where', err: unknown)
     return new InputError(`conjecture '${c.name}': ${part}${atText}: ${err.message}`);
   const what =
     err instanceof Error ? `${err.name === 'Error' ? '' : err.name + ': '}${err.message}` : String(err);
-  return new ScoreEvaluationError(c.name, part, encodeGraph6(g), `threw ${what}${atText}`);
+  const hint =
+    err instanceof InvariantDomainError
+      ? "; restrict the conjecture's domain (connected: true, or where) to graphs where it is defined"
+      : '';
+  return new ScoreEvaluationError(c.name, part, encodeGraph6(g), `threw ${what}${atText}${hint}`);
 }
 
 /** Evaluates c on an existing view (of graph g). */
