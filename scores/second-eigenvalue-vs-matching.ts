@@ -1,5 +1,6 @@
 /**
- * A false claim that only a search refutes: the project's demo for `refute hunt`.
+ * A false claim that only a search refutes, and a hard one: the demo of a hunt that must keep
+ * exploring. (scores/second-eigenvalue-vs-complement-degree.ts is the quick demo.)
  *
  * Claim: in a connected graph the second largest adjacency eigenvalue λ2 never exceeds the
  * matching number ν. It looks safe: it holds on every connected graph with at most 7 vertices
@@ -17,7 +18,11 @@
  * search found none. (Vertex numbering: c1 = 0, c2 = 1, w = 2, then c1's leaves, then c2's.)
  *
  * At the default order 14 the best counterexample we know is T(6, 5), 'MkaCCA?G@?C?G?G??',
- * scoring λ2 − ν ≈ 0.3199. A scenario of our own invention, written as an example of a conjecture file.
+ * scoring λ2 − ν ≈ 0.3199. The plain cross-entropy method stalls on it: in a one-off experiment
+ * with independent edge probabilities (batch 400, elite 30, 150 iterations) it stayed at a star
+ * (score −1) on 13 vertices and reached −0.11 on 14, without a counterexample.
+ *
+ * A scenario of our own invention, written as an example of a conjecture file.
  */
 import { defineConjecture } from 'refute';
 

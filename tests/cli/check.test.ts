@@ -98,6 +98,21 @@ describe('refute check', () => {
     expect(verdicts).toContain('tight');
   });
 
+  it('--families finds nothing against the quick hunt demo (exit 1); its known counterexample refutes it (exit 0)', async () => {
+    const file = 'scores/second-eigenvalue-vs-complement-degree.ts';
+    const families = await refute(['check', file, '--families', '--max-vertices', '14']);
+    expect(families.stderr).toBe('');
+    expect(families.status).toBe(1);
+    // K_10 minus the edges of a star K_{1,3} (see the file's header).
+    const known = await refute(['check', file, 'IJ~~~~~~w', '--json']);
+    expect(known.status).toBe(0);
+    expect(JSON.parse(known.stdout)).toMatchObject({
+      graph6: 'IJ~~~~~~w',
+      verdict: 'refutes',
+      certification: 'numerical',
+    });
+  });
+
   it('--families finds nothing against the hunt demo (exit 1)', async () => {
     const r = await refute([
       'check',

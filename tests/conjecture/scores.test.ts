@@ -45,7 +45,7 @@ function scoreOf(c: Conjecture, g6: string): number | undefined {
 }
 
 describe('scores/ examples on every graph with at most 7 vertices (networkx atlas)', () => {
-  it.each([0, 1, 2])(
+  it.each([0, 1, 2, 3])(
     '%i: scores equal the networkx/numpy values within 1e-9, and no graph refutes',
     (index) => {
       const name = reference.scoreNames[index];
@@ -55,14 +55,14 @@ describe('scores/ examples on every graph with at most 7 vertices (networkx atla
         const expected = reference.atlasScores[i];
         const graph = decodeGraph6(g6);
         const evaluation = evaluateConjecture(c, graph);
-        if (expected === null) {
-          expect(evaluation.inDomain, g6).toBe(false); // disconnected: outside every example's domain
+        const value = expected === null ? null : expected[index];
+        if (value === null) {
+          // Disconnected (outside every example's domain), or K1 (no λ2; excluded by where).
+          expect(evaluation.inDomain, g6).toBe(false);
           return;
         }
         expect(evaluation.inDomain, g6).toBe(true);
         if (!evaluation.inDomain) return;
-        const value = expected[index];
-        if (value === null) return; // λ2 of K1 (networkx has no second eigenvalue)
         expect(Math.abs(evaluation.score - value), `${name} on ${g6}`).toBeLessThanOrEqual(1e-9);
         expect(judge(c, graph, evaluation).kind, `${name} on ${g6}`).not.toBe('refutes');
       });
@@ -132,5 +132,37 @@ describe('scores/hong-spectral-radius-bound.ts (a true theorem)', () => {
     }
     // K1, K2, P3, K3, then star(n) and complete(n) for n = 4..20.
     expect(tightCount).toBe(4 + 2 * 17);
+  });
+});
+
+describe('scores/second-eigenvalue-vs-complement-degree.ts (the quick hunt demo)', () => {
+  it('holds on every built-in family up to 20 vertices', () => {
+    const c = conjectures.get('second-eigenvalue-vs-complement-degree')!;
+    for (const m of familyMembers(20))
+      expect(judge(c, m.graph, evaluateConjecture(c, m.graph)).kind, m.label).not.toBe('refutes');
+    expect(reference.familyMaxima['second-eigenvalue-vs-complement-degree'].score).toBeLessThan(0);
+  });
+
+  it('is refuted by K_10 minus a star K_{1,3}: λ2 is the middle root of x³ − 7x² − 14x + 12 (header)', () => {
+    const c = conjectures.get('second-eigenvalue-vs-complement-degree')!;
+    // The middle root by bisection on (0.6, 0.7), where f changes sign; no eigen-solver involved.
+    const f = (x: number) => x ** 3 - 7 * x ** 2 - 14 * x + 12;
+    let [lo, hi] = [0.6, 0.7];
+    expect(f(lo)).toBeGreaterThan(0);
+    expect(f(hi)).toBeLessThan(0);
+    for (let i = 0; i < 60; i++) {
+      const mid = (lo + hi) / 2;
+      if (f(mid) > 0) lo = mid;
+      else hi = mid;
+    }
+    const s = scoreOf(c, 'IJ~~~~~~w')!;
+    expect(s).toBeCloseTo(lo - 0.6, 9);
+    for (const t of reference.completeMinusStar) {
+      const expected = t.secondLargestEigenvalue - (2 * t.starLeaves) / t.order;
+      expect(scoreOf(c, t.graph6), t.graph6).toBeCloseTo(expected, 9);
+      expect(judge(c, decodeGraph6(t.graph6), { inDomain: true, score: expected }).kind).toBe(
+        t.order >= 10 ? 'refutes' : 'holds',
+      );
+    }
   });
 });

@@ -8,11 +8,13 @@ exclude, and for lambda2 on one vertex):
   spectral-radius-near-average-degree: lambda1 - 2m/n - 1
   second-eigenvalue-vs-matching:       lambda2 - nu          (nu: networkx max_weight_matching)
   hong-spectral-radius-bound:          lambda1 - sqrt(2m - n + 1)
+  second-eigenvalue-vs-complement-degree: lambda2 - (n - 1 - 2m/n)
 Eigenvalues by numpy.linalg.eigvalsh of the adjacency matrix. It also records the largest score
 of each example over networkx's own builds of the standard families on 2..20 vertices (paths,
 cycles, stars, complete, complete bipartite, Turan, wheels, hypercubes, Petersen, friendship,
 lollipops, barbells, brooms, prisms, ladders), and lambda2 and nu of the two-star trees T(a, b)
-of scores/second-eigenvalue-vs-matching.ts.
+of scores/second-eigenvalue-vs-matching.ts, and lambda2 of K_n minus the edges of a star K_{1,k}
+(scores/second-eigenvalue-vs-complement-degree.ts).
 
 Run: /usr/bin/python3 tests/scripts/make_score_references.py
 """
@@ -32,7 +34,12 @@ def spectrum(g):
     return sorted(np.linalg.eigvalsh(a), reverse=True)
 
 
-NAMES = ["spectral-radius-near-average-degree", "second-eigenvalue-vs-matching", "hong-spectral-radius-bound"]
+NAMES = [
+    "spectral-radius-near-average-degree",
+    "second-eigenvalue-vs-matching",
+    "hong-spectral-radius-bound",
+    "second-eigenvalue-vs-complement-degree",
+]
 
 
 def scores(g):
@@ -42,7 +49,13 @@ def scores(g):
     l1 = float(ev[0])
     l2 = float(ev[1]) if n >= 2 else None
     nu = len(nx.max_weight_matching(g, maxcardinality=True))
-    return [l1 - 2 * m / n - 1, None if l2 is None else l2 - nu, l1 - math.sqrt(2 * m - n + 1)]
+    complement_average_degree = n - 1 - 2 * m / n
+    return [
+        l1 - 2 * m / n - 1,
+        None if l2 is None else l2 - nu,
+        l1 - math.sqrt(2 * m - n + 1),
+        None if l2 is None else l2 - complement_average_degree,
+    ]
 
 
 def families(max_n):
@@ -127,12 +140,21 @@ for a, b in [(4, 4), (5, 4), (5, 5), (6, 5)]:
         }
     )
 
+complete_minus_star = []
+for n, k in [(9, 3), (10, 3), (10, 4), (12, 4)]:
+    g = nx.complete_graph(n)
+    g.remove_edges_from([(0, i) for i in range(1, k + 1)])
+    complete_minus_star.append(
+        {"order": n, "starLeaves": k, "graph6": g6(g), "secondLargestEigenvalue": float(spectrum(g)[1])}
+    )
+
 out = {
     "source": "tests/scripts/make_score_references.py with networkx %s, numpy %s" % (nx.__version__, np.__version__),
     "scoreNames": NAMES,
     "atlasScores": atlas_scores,
     "familyMaxima": family_max,
     "twoStarTrees": trees,
+    "completeMinusStar": complete_minus_star,
 }
 with open(os.path.join(fixtures, "score-references.json"), "w") as f:
     json.dump(out, f, separators=(",", ":"))
@@ -140,5 +162,5 @@ with open(os.path.join(fixtures, "score-references.json"), "w") as f:
 for i, name in enumerate(NAMES):
     vals = [s[i] for s in atlas_scores if s is not None and s[i] is not None]
     print(name, "atlas max %.6g" % max(vals), "families max %.6g" % family_max[name]["score"], family_max[name]["graph6"])
-for t in trees:
+for t in trees + complete_minus_star:
     print(t)
