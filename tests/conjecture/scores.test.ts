@@ -28,6 +28,12 @@ const reference = JSON.parse(
     secondLargestEigenvalue: number;
     matchingNumber: number;
   }>;
+  completeMinusStar: Array<{
+    order: number;
+    starLeaves: number;
+    graph6: string;
+    secondLargestEigenvalue: number;
+  }>;
 };
 
 const conjectures = new Map<string, Conjecture>();
