@@ -70,7 +70,9 @@ describe('evaluateConjecture()', () => {
     );
     expect(err).toBeInstanceOf(ScoreEvaluationError);
     expect(err).toBeInstanceOf(InputError);
-    expect(err.message).toMatch(/^conjecture 'probe': score returned NaN .* on graph 'Bg' \(graph6\)$/);
+    expect(err.message).toMatch(
+      /^conjecture 'probe': score returned NaN on graph 'Bg' \(graph6\); NaN often comes from 0\/0, .*; restrict the conjecture's domain/,
+    );
   });
 
   it.each([
@@ -115,6 +117,16 @@ describe('evaluateConjecture()', () => {
     });
     expect(errorOf(() => evaluateConjecture(c2, path(3))).message).toBe(
       "conjecture 'probe': where threw bad on graph 'Bg' (graph6)",
+    );
+  });
+
+  it('reports an invariant undefined on the graph, suggesting to restrict the domain', () => {
+    // λ2 needs two eigenvalues: K1 ('@', graph6 of the one-vertex graph) has one.
+    const c = defineConjecture({ ...base, score: (g) => g.secondLargestEigenvalue });
+    const err = errorOf(() => evaluateConjecture(c, emptyGraph(1)));
+    expect(err).toBeInstanceOf(ScoreEvaluationError);
+    expect(err.message).toMatch(
+      /^conjecture 'probe': score threw InvariantDomainError: secondLargestEigenvalue .* on graph '@' \(graph6\); restrict the conjecture's domain/,
     );
   });
 

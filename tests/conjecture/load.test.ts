@@ -196,7 +196,7 @@ export default [
     const loaded = await loadConjectureFile(file);
     // graph6 of P3: 'Bg' (see evaluate.test.ts).
     expect(() => evaluateConjecture(loaded.conjectures[0], pathGraph(3))).toThrow(
-      /^conjecture 'ratio': score returned NaN .* on graph 'Bg' \(graph6\)$/,
+      /^conjecture 'ratio': score returned NaN on graph 'Bg' \(graph6\); /,
     );
   });
 });
