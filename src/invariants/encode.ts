@@ -7,8 +7,12 @@ import { type InvariantValue } from './registry.js';
 type JsonScalar = number | string | boolean;
 
 function scalarToJson(x: number | bigint | boolean): JsonScalar {
-  if (typeof x === 'bigint') return x <= BigInt(Number.MAX_SAFE_INTEGER) && x >= -BigInt(Number.MAX_SAFE_INTEGER) ? Number(x) : x.toString();
-  if (typeof x === 'number' && !Number.isFinite(x)) return Number.isNaN(x) ? 'NaN' : x > 0 ? 'Infinity' : '-Infinity';
+  if (typeof x === 'bigint')
+    return x <= BigInt(Number.MAX_SAFE_INTEGER) && x >= -BigInt(Number.MAX_SAFE_INTEGER)
+      ? Number(x)
+      : x.toString();
+  if (typeof x === 'number' && !Number.isFinite(x))
+    return Number.isNaN(x) ? 'NaN' : x > 0 ? 'Infinity' : '-Infinity';
   return x;
 }
 

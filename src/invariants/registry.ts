@@ -10,6 +10,14 @@
 import { type Graph } from '../graph/graph.js';
 import { DEGREE_INVARIANTS } from './degrees.js';
 import { COMPONENT_INVARIANTS } from './components.js';
+import { MATCHING_INVARIANTS } from './matching.js';
+import { INDEPENDENCE_INVARIANTS } from './independence.js';
+import { CLIQUE_INVARIANTS } from './cliques.js';
+import { COLOURING_INVARIANTS } from './colouring.js';
+import { DOMINATION_INVARIANTS } from './domination.js';
+import { CONNECTIVITY_INVARIANTS } from './connectivity.js';
+import { SPANNING_TREE_INVARIANTS } from './spanning-trees.js';
+import { CUT_STRUCTURE_INVARIANTS } from './cut-structure.js';
 
 /** What sort of value an invariant has; decides JSON encoding, printing and certification. */
 export type InvariantKind = 'integer' | 'real' | 'boolean' | 'integer-list' | 'real-list';
@@ -67,10 +75,20 @@ const DEFINITIONS: ReadonlyArray<InvariantDefinition> = [
   // SPECTRAL
   // TRIANGLE
   // DEGREEIDX
+  ...MATCHING_INVARIANTS,
+  ...INDEPENDENCE_INVARIANTS,
+  ...CLIQUE_INVARIANTS,
+  ...COLOURING_INVARIANTS,
+  ...DOMINATION_INVARIANTS,
+  ...CONNECTIVITY_INVARIANTS,
+  ...SPANNING_TREE_INVARIANTS,
+  ...CUT_STRUCTURE_INVARIANTS,
 ];
 
 /** Name -> definition. */
-export const INVARIANTS: ReadonlyMap<string, InvariantDefinition> = new Map(DEFINITIONS.map((d) => [d.name, d]));
+export const INVARIANTS: ReadonlyMap<string, InvariantDefinition> = new Map(
+  DEFINITIONS.map((d) => [d.name, d]),
+);
 
 /** All invariant names, in registry order. */
 export function invariantNames(): string[] {
