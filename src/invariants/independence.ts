@@ -76,6 +76,9 @@ export const INDEPENDENCE_INVARIANTS: InvariantDefinition[] = [
     description: 'α, size of a largest independent set',
     compute: (g, memo) => memo.shared('maximumIndependentSet', () => maximumIndependentSet(g)).length,
   },
+];
+
+export const VERTEX_COVER_INVARIANTS: InvariantDefinition[] = [
   {
     name: 'vertexCoverNumber',
     kind: 'integer',

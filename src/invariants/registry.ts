@@ -10,8 +10,13 @@
 import { type Graph } from '../graph/graph.js';
 import { DEGREE_INVARIANTS } from './degrees.js';
 import { COMPONENT_INVARIANTS } from './components.js';
+import { DISTANCE_INVARIANTS } from './distances.js';
+import { SPECTRAL_INVARIANTS } from './spectra.js';
+import { TRIANGLE_INVARIANTS } from './triangles.js';
+import { DEGREE_INDEX_INVARIANTS } from './degree-indices.js';
+import { DISTANCE_SPECTRAL_INVARIANTS } from './distance-spectra.js';
 import { MATCHING_INVARIANTS } from './matching.js';
-import { INDEPENDENCE_INVARIANTS } from './independence.js';
+import { INDEPENDENCE_INVARIANTS, VERTEX_COVER_INVARIANTS } from './independence.js';
 import { CLIQUE_INVARIANTS } from './cliques.js';
 import { COLOURING_INVARIANTS } from './colouring.js';
 import { DOMINATION_INVARIANTS } from './domination.js';
@@ -71,18 +76,20 @@ export class InvariantMemo {
 const DEFINITIONS: ReadonlyArray<InvariantDefinition> = [
   ...DEGREE_INVARIANTS,
   ...COMPONENT_INVARIANTS,
-  // DISTANCE
-  // SPECTRAL
-  // TRIANGLE
-  // DEGREEIDX
+  ...DISTANCE_INVARIANTS,
+  ...SPECTRAL_INVARIANTS,
+  ...DISTANCE_SPECTRAL_INVARIANTS,
   ...MATCHING_INVARIANTS,
   ...INDEPENDENCE_INVARIANTS,
   ...CLIQUE_INVARIANTS,
   ...COLOURING_INVARIANTS,
   ...DOMINATION_INVARIANTS,
+  ...VERTEX_COVER_INVARIANTS,
   ...CONNECTIVITY_INVARIANTS,
+  ...TRIANGLE_INVARIANTS,
   ...SPANNING_TREE_INVARIANTS,
   ...CUT_STRUCTURE_INVARIANTS,
+  ...DEGREE_INDEX_INVARIANTS,
 ];
 
 /** Name -> definition. */
