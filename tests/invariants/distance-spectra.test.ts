@@ -1,5 +1,5 @@
-import Graph from 'graphology';
-import { singleSourceLength } from 'graphology-shortest-path/unweighted';
+import { UndirectedGraph } from 'graphology';
+import { singleSourceLength } from 'graphology-shortest-path/unweighted.js';
 import { describe, expect, test } from 'vitest';
 import { InvariantDomainError } from '../../src/errors.js';
 import { fromEdges } from '../../src/graph/builders.js';
@@ -86,8 +86,8 @@ describe('distanceSpectrum()', () => {
 });
 
 /** The same graph as a graphology object, for graphology-shortest-path. */
-function toGraphology(g: CompactGraph): Graph {
-  const h = new Graph({ type: 'undirected' });
+function toGraphology(g: CompactGraph): UndirectedGraph {
+  const h = new UndirectedGraph();
   for (let v = 0; v < g.order; v++) h.addNode(String(v));
   for (const [u, v] of edgeList(g)) h.addEdge(String(u), String(v));
   return h;
