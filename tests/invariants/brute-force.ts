@@ -89,22 +89,26 @@ export function bruteMatchingNumber(g: Graph): number {
   return go(0, 0);
 }
 
-/** Whether g has a proper colouring with k colours, trying every assignment in vertex order. */
+/**
+ * Whether g has a proper colouring with k colours, trying every assignment in vertex order.
+ * Colours are renamed in order of first use (any colouring can be), so vertex v only tries
+ * colours up to one more than the largest used before it.
+ */
 export function bruteColourable(g: Graph, k: number): boolean {
   const colour = new Array<number>(g.order).fill(-1);
-  const go = (v: number): boolean => {
+  const go = (v: number, used: number): boolean => {
     if (v === g.order) return true;
-    for (let c = 0; c < k; c++) {
+    for (let c = 0; c < Math.min(k, used + 1); c++) {
       let ok = true;
       for (let u = 0; u < v; u++) if (colour[u] === c && hasEdge(g, u, v)) ok = false;
       if (!ok) continue;
       colour[v] = c;
-      if (go(v + 1)) return true;
+      if (go(v + 1, Math.max(used, c + 1))) return true;
     }
     colour[v] = -1;
     return false;
   };
-  return go(0);
+  return go(0, 0);
 }
 
 /** χ: the least k for which {@link bruteColourable} succeeds. */

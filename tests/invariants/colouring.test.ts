@@ -58,15 +58,15 @@ describe('chromaticNumber()', () => {
       expect(chromaticNumber(graph), ref.graph6).toBe(bruteChromaticNumber(graph));
   });
 
-  test('matches the brute-force colouring search on seeded random graphs of 8..13 vertices', () => {
-    for (const g of randomGraphs('colouring', 100, 8, 13))
+  test('matches the brute-force colouring search on seeded random graphs of 8..15 vertices', () => {
+    for (const g of randomGraphs('colouring', 150, 8, 15))
       expect(chromaticNumber(g)).toBe(bruteChromaticNumber(g));
   });
 });
 
 describe('minimumColouring()', () => {
   test('is a proper colouring with exactly χ colours, and no proper colouring has one fewer', () => {
-    for (const g of randomGraphs('colouring-witness', 30, 10, 13, [0.2, 0.4, 0.6, 0.8])) {
+    for (const g of randomGraphs('colouring-witness', 40, 10, 16, [0.2, 0.4, 0.6, 0.8])) {
       const c = minimumColouring(g);
       expect(isProperColouring(g, c)).toBe(true);
       const k = coloursUsed(c);
