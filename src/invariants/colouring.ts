@@ -4,17 +4,18 @@
  * DSATUR-based branch and bound. The upper bound starts from Brélaz's DSATUR heuristic, the
  * lower bound is ω(G); a maximum clique is precoloured 0..ω−1 (which also breaks the colour
  * symmetry there). The search then always branches on an uncoloured vertex of largest
- * saturation (number of distinct colours among its neighbours; ties by most uncoloured
- * neighbours), trying each colour already used that no neighbour has, and one new colour, and
- * prunes every branch that would need as many colours as the best colouring found. It stops as
- * soon as the best colouring uses ω colours.
+ * saturation (number of distinct colours among its neighbours; ties by degree), trying each
+ * colour already used that no neighbour has, and one new colour, and prunes every branch that
+ * would need as many colours as the best colouring found. It stops as soon as the best colouring
+ * uses ω colours.
  *
  * @remarks Exact at every order, but the worst case is exponential (the problem is NP-hard), so
- * the order matters. Measured by tests/bench/hard-invariants.bench.ts (seeded G(n, p), worst of
- * 30 graphs per cell): at most 2 ms for n ≤ 40 at densities 0.1–0.8; 20–30 ms at n = 50,
- * p = 0.5; up to about 0.5–0.9 s at n = 60, p = 0.5 (and 0.3 s at n = 60, p = 0.8); 14 s at
- * n = 70, p = 0.5. So: well under a second up to 50 vertices at any density; use with care
- * beyond 60. Mid-density graphs, where χ exceeds ω by several colours, are the hard ones.
+ * the order matters. Measured by tests/bench/hard-invariants.bench.ts (seeded G(n, p)): for
+ * n ≤ 40 at densities 0.1–0.8, a mean of at most 1 ms and a worst case of 2 ms per graph on a
+ * quiet machine (up to 15–35 ms with both shared cores busy); 20–130 ms at n = 50, p = 0.5;
+ * 0.6–1.5 s at n = 60, p = 0.5 and 0.3–1.1 s at n = 60, p = 0.8; 14–19 s at n = 70, p = 0.5.
+ * So: well under a second up to 50 vertices at any density; expect seconds beyond 60.
+ * Mid-density graphs, where χ exceeds ω by several colours, are the hard ones.
  *
  * @see D. Brélaz, "New methods to color the vertices of a graph", Communications of the ACM 22(4)
  *   (1979) 251–256.
@@ -32,8 +33,6 @@ import { type InvariantDefinition } from './registry.js';
 class Saturation {
   readonly colour: Int32Array;
   readonly sat: Int32Array;
-  /** Number of uncoloured neighbours: the tie-break among equally saturated vertices. */
-  private readonly freeDegree: Int32Array;
   private readonly count: Int32Array;
 
   constructor(
@@ -42,7 +41,6 @@ class Saturation {
   ) {
     this.colour = new Int32Array(n).fill(-1);
     this.sat = new Int32Array(n);
-    this.freeDegree = Int32Array.from(adj, (a) => a.length);
     this.count = new Int32Array(n * n);
   }
 
@@ -52,24 +50,19 @@ class Saturation {
 
   assign(v: number, c: number): void {
     this.colour[v] = c;
-    for (const u of this.adj[v]) {
-      if (this.count[u * this.n + c]++ === 0) this.sat[u]++;
-      this.freeDegree[u]--;
-    }
+    for (const u of this.adj[v]) if (this.count[u * this.n + c]++ === 0) this.sat[u]++;
   }
 
   unassign(v: number): void {
     const c = this.colour[v];
     this.colour[v] = -1;
-    for (const u of this.adj[v]) {
-      if (--this.count[u * this.n + c] === 0) this.sat[u]--;
-      this.freeDegree[u]++;
-    }
+    for (const u of this.adj[v]) if (--this.count[u * this.n + c] === 0) this.sat[u]--;
   }
 
   /**
-   * An uncoloured vertex of largest saturation, ties by most uncoloured neighbours then label;
-   * -1 when none is left.
+   * An uncoloured vertex of largest saturation, ties by degree then label; -1 when none is left.
+   * (Breaking ties by degree among uncoloured vertices instead was measured: no gain, so the
+   * static degree stays.)
    */
   pick(): number {
     let best = -1;
@@ -78,7 +71,7 @@ class Saturation {
       if (
         best === -1 ||
         this.sat[v] > this.sat[best] ||
-        (this.sat[v] === this.sat[best] && this.freeDegree[v] > this.freeDegree[best])
+        (this.sat[v] === this.sat[best] && this.adj[v].length > this.adj[best].length)
       ) {
         best = v;
       }
