@@ -3,7 +3,7 @@
  * [--fixed-order] [--order-slack K] [--max-seconds S] [--json]`: polishes each given graph by
  * variable neighbourhood search over structured local edits (src/search/polish/) and prints,
  * per input, the best graph reached at its order and at each other order it visited, with the
- * score and whether it refutes the conjecture. Exit 0 when some result refutes, 1 when none,
+ * score and the verdict of src/conjecture/verdict.ts (the one place that decides what refutes). Exit 0 when some result refutes, 1 when none,
  * 2 on bad input. All inputs are read and checked before the first is polished, so a malformed
  * line costs nothing and prints nothing.
  */
@@ -22,7 +22,8 @@ import {
   type PolishSettings,
   type ScoredGraph,
 } from '../search/polish/vns.js';
-import { describeRefutation, refutationOf } from '../search/polish/verdict.js';
+import { checkExitStatus, describeVerdict, judge, type Verdict } from '../conjecture/verdict.js';
+import { type Conjecture } from '../conjecture/types.js';
 import { type GraphInput, readGraphInputs } from './graph-input.js';
 import { type CommandOutcome } from './main.js';
 import { writeOut } from './output.js';
@@ -70,34 +71,43 @@ function describeStart(input: GraphInput, o: PolishOutcome): string {
   return `from ${input.graph6} (${input.where}): n=${input.graph.order}, m=${input.graph.size}, ${scoreText}`;
 }
 
-function textBlock(input: GraphInput, o: PolishOutcome): string {
+/** The project's one verdict function (src/conjecture/verdict.ts) on a polished graph. */
+function verdictOf(c: Conjecture, s: ScoredGraph): Verdict {
+  return judge(c, s.graph, { inDomain: true, score: s.score });
+}
+
+function textBlock(c: Conjecture, input: GraphInput, o: PolishOutcome): string {
   const lines = [describeStart(input, o)];
   if (o.best === undefined) lines.push(`  best at n=${input.graph.order}: no graph in the domain found`);
   for (const s of resultsOf(o)) {
     const g: Graph = s.graph;
     lines.push(
       `  best at n=${g.order}: ${encodeGraph6(g)}  m=${g.size}  score ${formatNumber(s.score)}  ` +
-        describeRefutation(refutationOf(s.score)),
+        describeVerdict(verdictOf(c, s)),
     );
   }
   lines.push(`  ${o.evaluations} graphs scored`);
   return lines.join('\n') + '\n';
 }
 
-function jsonLine(input: GraphInput, o: PolishOutcome): string {
+function jsonLine(c: Conjecture, input: GraphInput, o: PolishOutcome): string {
   const ev = o.startEvaluation;
   return (
     JSON.stringify({
       input: input.graph6,
       where: input.where,
       start: { order: input.graph.order, score: ev.inDomain ? scoreToJson(ev.score) : null },
-      results: resultsOf(o).map((s) => ({
-        graph6: encodeGraph6(s.graph),
-        order: s.graph.order,
-        size: s.graph.size,
-        score: scoreToJson(s.score),
-        refutes: refutationOf(s.score),
-      })),
+      results: resultsOf(o).map((s) => {
+        const v = verdictOf(c, s);
+        return {
+          graph6: encodeGraph6(s.graph),
+          order: s.graph.order,
+          size: s.graph.size,
+          score: scoreToJson(s.score),
+          verdict: v.kind,
+          certification: v.certification,
+        };
+      }),
       evaluations: o.evaluations,
     }) + '\n'
   );
@@ -140,7 +150,7 @@ export function addPolishCommand(program: Command, outcome: CommandOutcome): voi
         throw new InputError('no start graphs given: standard input held no graph6 line');
 
       const evaluate = (g: Graph) => evaluateConjecture(conjecture, g);
-      let refuted = false;
+      let refutations = 0;
       for (let i = 0; i < inputs.length; i++) {
         const settings: PolishSettings = {
           ...POLISH_DEFAULTS,
@@ -151,9 +161,9 @@ export function addPolishCommand(program: Command, outcome: CommandOutcome): voi
           ...(seconds === undefined ? {} : { deadline: Date.now() + seconds * 1000 }),
         };
         const o = polishGraph(evaluate, inputs[i].graph, polishStream(opts.seed, i), settings);
-        if (resultsOf(o).some((s) => refutationOf(s.score) !== 'none')) refuted = true;
-        await writeOut(opts.json ? jsonLine(inputs[i], o) : textBlock(inputs[i], o));
+        refutations += resultsOf(o).filter((s) => verdictOf(conjecture, s).kind === 'refutes').length;
+        await writeOut(opts.json ? jsonLine(conjecture, inputs[i], o) : textBlock(conjecture, inputs[i], o));
       }
-      outcome.status = refuted ? 0 : 1;
+      outcome.status = checkExitStatus(refutations);
     });
 }

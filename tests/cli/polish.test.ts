@@ -61,9 +61,7 @@ describe('refute polish (end to end)', () => {
     expect(r.status).toBe(0);
     const lines = r.stdout.trim().split('\n');
     expect(lines[0]).toMatch(/^from IsaCA\?_C\? \(argument 1\): n=10, m=9, score -0\.\d+$/);
-    const m = /^ {2}best at n=10: (\S+) {2}m=9 {2}score (\S+) {2}refutes \(numerical, not certified\)$/.exec(
-      lines[1],
-    );
+    const m = /^ {2}best at n=10: (\S+) {2}m=9 {2}score (\S+) {2}refutes \(numerical\)$/.exec(lines[1]);
     expect(m).not.toBeNull();
     const g = decodeGraph6(m![1]);
     expect(Number(m![2])).toBeGreaterThan(0);
@@ -96,7 +94,9 @@ describe('refute polish (end to end)', () => {
       expect(rec.results[0].order).toBe(rec.start.order);
       for (const res of rec.results) {
         expect(Math.abs(res.order - rec.start.order)).toBeLessThanOrEqual(1);
-        expect(res.refutes).toBe(res.score > 0 ? 'numerical' : 'none');
+        // verdict.ts: a score above the rounding margin 1e-9 refutes, numerically.
+        expect(res.verdict).toBe(res.score > 1e-9 ? 'refutes' : res.score >= -1e-9 ? 'tight' : 'holds');
+        expect(res.certification).toBe(res.verdict === 'refutes' ? 'numerical' : null);
         expect(decodeGraph6(res.graph6).order).toBe(res.order);
       }
       expect(rec.evaluations).toBeLessThanOrEqual(150);
@@ -111,12 +111,12 @@ describe('refute polish (end to end)', () => {
     expect(b.stdout.replace(/stdin line (\d)/g, (_, k) => `argument ${k}`)).toBe(a.stdout);
   });
 
-  test('a true claim exits 1 and says the results do not refute it', async () => {
+  test('a true claim exits 1 and says the results hold', async () => {
     const r = await runCli(['polish', trueClaim, 'EhCG', '--steps', '60']);
     expect(r.status).toBe(1);
     expect(r.stdout).toMatch(/^from EhCG \(argument 1\): n=6, m=5, score -11\n/);
     expect(r.stdout).not.toMatch(/refutes/);
-    expect(r.stdout).toMatch(/does not refute/);
+    expect(r.stdout).toMatch(/ {2}holds\n/);
   });
 
   test('a malformed start graph exits 2 with one line, before anything is printed', async () => {

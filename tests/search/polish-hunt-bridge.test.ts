@@ -129,21 +129,21 @@ describe('polishForHunt()', () => {
 });
 
 describe('near misses', () => {
-  test('nearMissRecord() names the order offset and the refutation', () => {
+  test("nearMissRecord() names the order offset and carries the hunt's decision", () => {
     const g = star(11);
-    const rec = nearMissRecord({ graph: g, score: 0.25 }, 10);
+    const rec = nearMissRecord({ graph: g, score: 0.25 }, 10, 'numerical');
     expect(rec).toEqual({
       graph6: encodeGraph6(g),
       order: 11,
       offset: 'n+1',
       score: 0.25,
-      refutes: 'numerical',
+      counterexample: 'numerical',
     });
     expect(graphsEqual(decodeGraph6(rec.graph6), g)).toBe(true);
-    expect(nearMissRecord({ graph: star(8), score: -Infinity }, 10)).toMatchObject({
+    expect(nearMissRecord({ graph: star(8), score: -Infinity }, 10, null)).toMatchObject({
       offset: 'n-2',
       score: '-Infinity',
-      refutes: 'none',
+      counterexample: null,
     });
   });
   test('mergeNearMisses() keeps the best per order, by increasing order', () => {

@@ -24,7 +24,7 @@ import { computeInvariant } from '../../src/invariants/registry.js';
 import { moveLeaf } from '../../src/search/polish/moves/move-leaf.js';
 import { polishGraphs, polishStream } from '../../src/search/polish/polish-graphs.js';
 import { polishGraph, POLISH_DEFAULTS, type PolishOutcome } from '../../src/search/polish/vns.js';
-import { refutationOf } from '../../src/search/polish/verdict.js';
+import { judge } from '../../src/conjecture/verdict.js';
 import { randomGraph, seededRng } from '../support/random-graph.js';
 
 const SPECTRAL_GAP = defineConjecture({
@@ -93,7 +93,7 @@ describe('polishGraph()', () => {
     });
     expect(o.best).toBeDefined();
     const score = expectGenuine(SPECTRAL_GAP, o.best!.graph, o.best!.score);
-    expect(refutationOf(score)).toBe('numerical');
+    expect(judge(SPECTRAL_GAP, o.best!.graph, { inDomain: true, score }).kind).toBe('refutes');
     expect(computeInvariant(o.best!.graph, 'triangleCount')).toBe(0);
     expect(computeInvariant(o.best!.graph, 'isConnected')).toBe(true);
     expect(o.best!.graph.order).toBe(10);
@@ -129,7 +129,7 @@ describe('polishGraph()', () => {
     expect(at9).toBeDefined();
     const score9 = expectGenuine(SPECTRAL_GAP, at9!.graph, at9!.score);
     expect(score9).toBeGreaterThanOrEqual(starScore(9) - 1e-9);
-    expect(refutationOf(score9)).toBe('numerical');
+    expect(judge(SPECTRAL_GAP, at9!.graph, { inDomain: true, score: score9 }).kind).toBe('refutes');
     // Orders scored: 8 for the walk, 7 and 9 only as looks at the order-changing neighbours.
     expect(new Set(seen.map((g) => g.order))).toEqual(new Set([7, 8, 9]));
   });
@@ -284,13 +284,5 @@ describe('determinism', () => {
         .filter((t) => t.graph.order === s.graph.order);
       expect(s.score).toBe(Math.max(...candidates.map((t) => t.score)));
     }
-  });
-});
-
-describe('refutationOf()', () => {
-  test('only a positive score refutes, and only numerically until certification', () => {
-    expect(refutationOf(1e-3)).toBe('numerical');
-    expect(refutationOf(0)).toBe('none');
-    expect(refutationOf(-Infinity)).toBe('none');
   });
 });

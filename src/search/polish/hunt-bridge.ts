@@ -9,7 +9,6 @@
 import { type Graph, hasEdge } from '../../graph/graph.js';
 import { encodeGraph6 } from '../../graph/graph6.js';
 import { polishGraphs } from './polish-graphs.js';
-import { refutationOf, type Refutation } from './verdict.js';
 import { type Evaluate, type ScoredGraph } from './vns.js';
 
 /** How the hunt polishes. */
@@ -96,17 +95,23 @@ export interface NearMissRecord {
   /** "n+1", "n-1", ...: where it stands relative to the hunt's order. */
   readonly offset: string;
   readonly score: number | string;
-  readonly refutes: Refutation;
+  /** The hunt's counterexample decision on it: "numerical", "certified", or null (not one). */
+  readonly counterexample: 'numerical' | 'certified' | null;
 }
 
-export function nearMissRecord(s: ScoredGraph, huntOrder: number): NearMissRecord {
+/** The record of near miss s of a hunt at order huntOrder, given the hunt's decision on it. */
+export function nearMissRecord(
+  s: ScoredGraph,
+  huntOrder: number,
+  counterexample: 'numerical' | 'certified' | null,
+): NearMissRecord {
   const d = s.graph.order - huntOrder;
   return {
     graph6: encodeGraph6(s.graph),
     order: s.graph.order,
     offset: `n${d >= 0 ? '+' : '-'}${Math.abs(d)}`,
     score: Number.isFinite(s.score) ? s.score : String(s.score),
-    refutes: refutationOf(s.score),
+    counterexample,
   };
 }
 
