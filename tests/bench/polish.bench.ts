@@ -2,16 +2,23 @@
  * How often and how fast the polisher alone refutes false claims from random starts, against
  * random sampling with the same budget: `npm run bench -- polish`.
  *
- * The claims are scenarios of our own, each false with counterexamples of a different shape:
+ * First the example conjectures of scores/ (Hong's bound is a true theorem with tight cases: its
+ * row must stay at 0), then claims of this file, each false with counterexamples of a different
+ * shape:
  * stars (spectral gap), complete bipartite graphs (energy against edges), long paths (Wiener
  * index), two dense halves joined thinly (second eigenvalue), near-complete graphs (triangles
  * against edges: t <= (sqrt 2 / 3) m^(3/2) is a theorem, tight for cliques, and 0.4 < sqrt 2 / 3
  * makes K_11 and K_12 counterexamples). Each start is a seeded G(n, 0.3);
- * each run gets `BUDGET` scored graphs. Reported per claim: runs that refuted, and the medians
+ * each run gets `BUDGET` scored graphs (BENCH_POLISH_BUDGET, default 3000). Reported per claim: runs that refuted, and the medians
  * (over refuting runs) of graphs scored and milliseconds until the first positive score.
  */
 import seedrandom from 'seedrandom';
+import { fileURLToPath } from 'node:url';
+import { readdirSync } from 'node:fs';
+import { join } from 'node:path';
 import { defineConjecture } from '../../src/conjecture/define.js';
+import { loadConjectureFile } from '../../src/conjecture/load.js';
+import { judge } from '../../src/conjecture/verdict.js';
 import { evaluateConjecture } from '../../src/conjecture/evaluate.js';
 import { type Conjecture, type Evaluation } from '../../src/conjecture/types.js';
 import { type Graph } from '../../src/graph/graph.js';
@@ -20,7 +27,7 @@ import { polishStream } from '../../src/search/polish/polish-graphs.js';
 import { randomGraph } from '../support/random-graph.js';
 import { row } from './timing.js';
 
-const BUDGET = 3000;
+const BUDGET = Number(process.env.BENCH_POLISH_BUDGET ?? 3000);
 const RUNS = 10;
 
 const CLAIMS: readonly Conjecture[] = [
@@ -68,7 +75,7 @@ interface RunResult {
   readonly ms: number;
 }
 
-/** evaluate wrapped to note when (graphs scored, ms) the first positive in-domain score appears. */
+/** evaluate wrapped to note when (graphs scored, ms) the first refutation (verdict.ts) appears. */
 function watched(c: Conjecture): { evaluate: (g: Graph) => Evaluation; first: () => RunResult } {
   let count = 0;
   let hit: RunResult | undefined;
@@ -77,7 +84,7 @@ function watched(c: Conjecture): { evaluate: (g: Graph) => Evaluation; first: ()
     evaluate: (g) => {
       const ev = evaluateConjecture(c, g);
       count++;
-      if (hit === undefined && ev.inDomain && ev.score > 0) {
+      if (hit === undefined && judge(c, g, ev).kind === 'refutes') {
         hit = { refuted: true, scored: count, ms: performance.now() - t0 };
       }
       return ev;
@@ -117,11 +124,18 @@ export default async function polishBench(): Promise<void> {
   console.log(
     `polish from G(n, 0.3) vs random G(n, p) sampling; ${RUNS} seeds, ${BUDGET} scored graphs per run`,
   );
-  const widths = [28, 4, 10, 12, 10, 10, 12, 10];
+  const widths = [38, 4, 8, 11, 8, 9, 11, 8];
   console.log(
     row(['claim', 'n', 'polish', 'med scored', 'med ms', 'sampling', 'med scored', 'med ms'], widths),
   );
-  for (const c of CLAIMS) {
+  const scoresDir = fileURLToPath(new URL('../../scores/', import.meta.url));
+  const examples: Conjecture[] = [];
+  for (const f of readdirSync(scoresDir)
+    .filter((x) => x.endsWith('.ts'))
+    .sort()) {
+    examples.push(...(await loadConjectureFile(join(scoresDir, f))).conjectures);
+  }
+  for (const c of [...examples, ...CLAIMS]) {
     const polish: RunResult[] = [];
     const sampling: RunResult[] = [];
     for (let s = 0; s < RUNS; s++) {
