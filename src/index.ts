@@ -33,3 +33,11 @@ export {
   type CanonicalSearchResult,
   type CanonicalSearchOptions,
 } from './graph/canonical.js';
+export { defineConjecture } from './conjecture/define.js';
+export type {
+  Conjecture,
+  ConjectureSpec,
+  GraphView,
+  GraphInvariants,
+  Evaluation,
+} from './conjecture/types.js';
