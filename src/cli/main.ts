@@ -7,6 +7,7 @@ import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
 import { addGenerateCommand } from './generate.js';
+import { addSweepCommand } from './sweep.js';
 import { TOOL_VERSION } from '../version.js';
 
 /** What a command's action returns: the process's exit status. */
@@ -28,6 +29,7 @@ export function buildProgram(outcome: CommandOutcome): Command {
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   addInvariantsCommand(program, outcome);
   addGenerateCommand(program, outcome);
+  addSweepCommand(program, outcome);
   return program;
 }
 
