@@ -33,13 +33,20 @@ export function parseOrderOption(
 }
 
 /**
+ * A failed write (EPIPE when the consumer, like `head`, stopped reading) is reported to the
+ * write's callback, which rejects and ends the command; the stream also emits it as an
+ * 'error' event, which needs a listener or Node ends the process with a stack trace.
+ */
+export function expectWriteErrorsInCallbacks(stream: NodeJS.WritableStream): void {
+  if (stream.listenerCount('error') === 0) stream.on('error', () => undefined);
+}
+
+/**
  * Writes bytes to a stream, resolving when the stream can take more (back-pressure) and
  * rejecting on a write error such as EPIPE (a consumer like `head` that stopped reading).
  */
 export function writeBytes(bytes: Uint8Array, stream: NodeJS.WritableStream = process.stdout): Promise<void> {
-  // The write callback reports the error; the stream also emits it as an event, which must
-  // have a listener or Node ends the process with an unhandled 'error'.
-  if (stream.listenerCount('error') === 0) stream.on('error', () => undefined);
+  expectWriteErrorsInCallbacks(stream);
   return new Promise((resolve, reject) => {
     const ok = stream.write(bytes, (err) => {
       if (err) reject(err);
