@@ -12,9 +12,11 @@
  * accepted exactly when v lies in the automorphism-group orbit of m(H), that is, when G is
  * H's canonical parent up to isomorphism. Then every isomorphism class on m vertices is
  * accepted from exactly one class on m-1 vertices; two subsets give isomorphic accepted
- * children of the same G only when an automorphism of G maps one onto the other, so children
- * of a G with a trivial group need no further check, and those of a G with automorphisms are
- * deduplicated by canonical form among the siblings (at most 2^(m-1) of them in memory).
+ * children of the same G only when an automorphism of G maps one onto the other. So children
+ * of a G with a trivial group need no further check; for a G with a group of at most
+ * {@link MAX_LISTED_GROUP} elements, only subsets that are the least (as bit masks) of their
+ * orbit under the group are tried; for a larger group, accepted children are deduplicated by
+ * canonical form among the siblings (at most 2^(m-1) of them in memory).
  *
  * The acceptance test is done in increasing cost: the new vertex must have maximum degree
  * (else reject); if it is the only such vertex, accept; else it must lie in the last cell of
@@ -32,6 +34,9 @@ import { PartitionRefiner } from '../graph/partition-refinement.js';
 
 /** Largest order generate accepts: graphs are one 32-bit word per row, and 16 already has ~6.4e22 classes. */
 export const MAX_ENUMERATION_ORDER = 16;
+
+/** Largest automorphism group of a parent whose elements are listed to test subset orbits. */
+export const MAX_LISTED_GROUP = 2048;
 
 /** Which share of the stream to produce: part `index` (0-based) of `count`. */
 export interface EnumerationPart {
@@ -51,8 +56,10 @@ export interface EnumerationOptions {
 export interface EnumerationStats {
   /** Candidate children considered (subsets tried). */
   candidates: number;
-  /** Candidates that needed the full canonical search. */
+  /** Candidates that needed the full canonical search for the acceptance test. */
   fullSearches: number;
+  /** Canonical searches run to deduplicate siblings (parents with groups over MAX_LISTED_GROUP). */
+  dedupSearches: number;
 }
 
 function popcount(x: number): number {
@@ -100,13 +107,18 @@ export class GraphEnumerator {
   readonly part: EnumerationPart;
   /** Order whose graphs are dealt out to the parts. */
   readonly splitOrder: number;
-  readonly stats: EnumerationStats = { candidates: 0, fullSearches: 0 };
+  readonly stats: EnumerationStats = { candidates: 0, fullSearches: 0, dedupSearches: 0 };
 
   private readonly levelRows: Uint32Array[] = [];
   private readonly levelDegrees: Int32Array[] = [];
   private readonly maxDegree: Int32Array;
   private readonly nextMask: Float64Array;
   private readonly siblings: Array<Set<string> | null> = [];
+  /**
+   * Per level, for each non-identity automorphism of the parent, the images of subset masks:
+   * entries [512 e, 512 e + 256) map the low byte, [512 e + 256, 512 e + 512) the high byte.
+   */
+  private readonly subsetImages: Array<Uint16Array | null> = [];
   private readonly refiners: PartitionRefiner[] = [];
   private top: number;
   private splitCounter = 0;
@@ -134,6 +146,7 @@ export class GraphEnumerator {
       this.levelRows.push(new Uint32Array(order));
       this.levelDegrees.push(new Int32Array(order));
       this.siblings.push(null);
+      this.subsetImages.push(null);
       this.refiners.push(new PartitionRefiner(m, 1));
     }
     this.maxDegree = new Int32Array(order + 1);
@@ -221,6 +234,13 @@ export class GraphEnumerator {
       if (du > maxOthers) maxOthers = du;
     }
     if (d < maxOthers) return false;
+    const images = this.subsetImages[k];
+    if (images !== null) {
+      // Try S only if no automorphism of the parent maps it to a smaller mask.
+      const lo = mask & 255;
+      const hi = (mask >>> 8) + 256;
+      for (let e = 0; e < images.length; e += 512) if ((images[e + lo] | images[e + hi]) < mask) return false;
+    }
     const m = k + 1;
     const parentRows = this.levelRows[k];
     const childRows = this.levelRows[m];
@@ -249,7 +269,10 @@ export class GraphEnumerator {
       }
     }
     if (siblings !== null) {
-      if (search === null) search = canonicalSearchRows(m, childRows, 1);
+      if (search === null) {
+        this.stats.dedupSearches++;
+        search = canonicalSearchRows(m, childRows, 1);
+      }
       const key = canonicalKey(search);
       if (siblings.has(key)) return false;
       siblings.add(key);
@@ -257,7 +280,10 @@ export class GraphEnumerator {
     return search ?? true;
   }
 
-  /** Sets up the level-m graph (just built) as a parent: its maximum degree and whether its group is trivial. */
+  /**
+   * Sets up the level-m graph (just built) as a parent: its maximum degree, and how its
+   * children are kept apart under its automorphism group (see the module comment).
+   */
   private prepareParent(m: number, search: CanonicalSearchResult | null): void {
     const rows = this.levelRows[m];
     const degrees = this.levelDegrees[m];
@@ -265,15 +291,60 @@ export class GraphEnumerator {
     for (let u = 0; u < m; u++) if (degrees[u] > maxDegree) maxDegree = degrees[u];
     this.maxDegree[m] = maxDegree;
     this.nextMask[m] = 0;
-    let trivialGroup: boolean;
-    if (search !== null) {
-      trivialGroup = search.generators.length === 0;
-    } else {
+    this.siblings[m] = null;
+    this.subsetImages[m] = null;
+    if (search === null) {
       const refiner = this.refiners[m];
       refiner.setUnit();
       refiner.refine(rows, 1);
-      trivialGroup = refiner.cells === m || canonicalSearchRows(m, rows, 1).generators.length === 0;
+      if (refiner.cells === m) return; // discrete equitable partition: trivial group
+      search = canonicalSearchRows(m, rows, 1);
     }
-    this.siblings[m] = trivialGroup ? null : new Set<string>();
+    if (search.generators.length === 0) return;
+    if (search.groupSize <= BigInt(MAX_LISTED_GROUP))
+      this.subsetImages[m] = subsetImageTables(m, search.generators);
+    else this.siblings[m] = new Set<string>();
   }
+}
+
+/** Every element of the permutation group generated by `generators` (on 0..m-1), by closure. */
+function groupElements(m: number, generators: ReadonlyArray<Int32Array>): Int32Array[] {
+  const identity = Int32Array.from({ length: m }, (_, i) => i);
+  const elements: Int32Array[] = [identity];
+  // Key: the permutation as a string of char codes (m <= 16), much cheaper than join(',').
+  const seen = new Set<string>([String.fromCharCode(...identity)]);
+  for (let i = 0; i < elements.length; i++) {
+    const element = elements[i];
+    for (const gen of generators) {
+      const product = new Int32Array(m);
+      for (let v = 0; v < m; v++) product[v] = gen[element[v]];
+      const key = String.fromCharCode(...product);
+      if (!seen.has(key)) {
+        seen.add(key);
+        elements.push(product);
+      }
+    }
+  }
+  return elements;
+}
+
+/** Byte-wise subset image tables (layout of GraphEnumerator.subsetImages) for the non-identity elements. */
+function subsetImageTables(m: number, generators: ReadonlyArray<Int32Array>): Uint16Array {
+  const elements = groupElements(m, generators).slice(1);
+  const tables = new Uint16Array(elements.length * 512);
+  elements.forEach((perm, e) => {
+    for (let byte = 0; byte < 256; byte++) {
+      let low = 0;
+      let high = 0;
+      for (let b = 0; b < 8; b++) {
+        if ((byte >>> b) & 1) {
+          if (b < m) low |= 1 << perm[b];
+          if (b + 8 < m) high |= 1 << perm[b + 8];
+        }
+      }
+      tables[e * 512 + byte] = low;
+      tables[e * 512 + 256 + byte] = high;
+    }
+  });
+  return tables;
 }

@@ -76,48 +76,6 @@ export interface CanonicalSearchResult {
   readonly nodes: number;
 }
 
-/** Per-order working storage, reused between calls (the search is synchronous, so never shared). */
-class Workspace {
-  readonly refiner: PartitionRefiner;
-  readonly labs: Int32Array[] = [];
-  readonly cellStarts: Int32Array[] = [];
-  readonly cellSizes: Int32Array[] = [];
-  readonly cellCounts: Int32Array;
-  readonly position: Int32Array;
-  readonly leafRows: Uint32Array;
-  readonly targets: Int32Array[] = [];
-
-  constructor(
-    readonly order: number,
-    readonly wordsPerRow: number,
-  ) {
-    this.refiner = new PartitionRefiner(order, wordsPerRow);
-    for (let l = 0; l <= order; l++) {
-      this.labs.push(new Int32Array(order));
-      this.cellStarts.push(new Int32Array(order));
-      this.cellSizes.push(new Int32Array(order));
-      this.targets.push(new Int32Array(order));
-    }
-    this.cellCounts = new Int32Array(order + 1);
-    this.position = new Int32Array(order);
-    this.leafRows = new Uint32Array(order * wordsPerRow);
-  }
-}
-
-const workspaces = new Map<number, Workspace>();
-
-function workspaceFor(order: number, wordsPerRow: number): Workspace {
-  const key = order * 64 + wordsPerRow;
-  let ws = workspaces.get(key);
-  if (ws === undefined) {
-    ws = new Workspace(order, wordsPerRow);
-    // Keep the cache small: orders met in one process are few, but do not grow without bound.
-    if (workspaces.size > 64) workspaces.clear();
-    workspaces.set(key, ws);
-  }
-  return ws;
-}
-
 /** Union-find root with path halving. */
 function findRoot(parent: Int32Array, v: number): number {
   while (parent[v] !== v) {
@@ -144,45 +102,111 @@ function orbitsOf(order: number, gens: ReadonlyArray<Int32Array>): Int32Array {
 }
 
 /**
- * Runs the canonical labelling search on a graph given as raw bitset rows (the form the
- * enumerator works on, without building a Graph object per candidate).
+ * The search tree walk for one order, with all its storage allocated once and reused between
+ * calls (the search is synchronous, so an instance is never used by two searches at a time).
  */
-export function canonicalSearchRows(
-  order: number,
-  rows: Uint32Array,
-  wordsPerRow: number,
-  options: CanonicalSearchOptions = {},
-): CanonicalSearchResult {
-  const maxNodes = options.maxNodes ?? DEFAULT_MAX_SEARCH_NODES;
-  const n = order;
-  const wpr = wordsPerRow;
-  const ws = workspaceFor(n, wpr);
-  const { refiner, labs, cellStarts, cellSizes, cellCounts, position, leafRows, targets } = ws;
+class CanonicalSearcher {
+  private readonly refiner: PartitionRefiner;
+  private readonly labs: Int32Array[] = [];
+  private readonly cellStarts: Int32Array[] = [];
+  private readonly cellSizes: Int32Array[] = [];
+  private readonly targets: Int32Array[] = [];
+  /** Invariant of each node on the current path: number of cells and refinement trace. */
+  private readonly cellCounts: Int32Array;
+  private readonly curTrace: Int32Array;
+  /** The same for the first leaf's path and the best leaf's path. */
+  private readonly firstCells: Int32Array;
+  private readonly firstTrace: Int32Array;
+  private readonly bestCells: Int32Array;
+  private readonly bestTrace: Int32Array;
+  /** Vertices individualised along the current, first and best paths. */
+  private readonly curPath: Int32Array;
+  private readonly firstPath: Int32Array;
+  private readonly bestPath: Int32Array;
+  private readonly firstLab: Int32Array;
+  private readonly bestLab: Int32Array;
+  private readonly position: Int32Array;
+  private readonly leafRows: Uint32Array;
+  private readonly firstRows: Uint32Array;
+  private readonly bestRows: Uint32Array;
+  /**
+   * For each level of the first path: orbit length of the first-path vertex in its target
+   * cell, under the generators fixing the path above it (set when that node's loop ends).
+   */
+  private readonly firstPathOrbitLength: Float64Array;
 
-  // Invariants along the current path, the first path and the best path: trace and cell count.
-  const curTrace = new Int32Array(n + 1);
-  const firstTrace = new Int32Array(n + 1);
-  const bestTrace = new Int32Array(n + 1);
-  const firstCells = new Int32Array(n + 1);
-  const bestCells = new Int32Array(n + 1);
-  // Vertices individualised along the current, first and best paths.
-  const curPath = new Int32Array(n);
-  const firstPath = new Int32Array(n);
-  const bestPath = new Int32Array(n);
-  let firstDepth = -1;
-  let bestDepth = -1;
-  const firstLab = new Int32Array(n);
-  const bestLab = new Int32Array(n);
-  const firstRows = new Uint32Array(n * wpr);
-  const bestRows = new Uint32Array(n * wpr);
-  const generators: Int32Array[] = [];
-  // For each level of the first path: orbit length of the first-path vertex in its target cell,
-  // under the generators fixing the path above it (computed when that node's loop ends).
-  const firstPathOrbitLength = new Float64Array(n + 1).fill(1);
-  let nodes = 0;
+  private rows: Uint32Array = new Uint32Array(0);
+  private maxNodes = 0;
+  private nodes = 0;
+  private firstDepth = -1;
+  private bestDepth = -1;
+  private generators: Int32Array[] = [];
 
-  /** Fills leafRows with the graph relabelled by the discrete partition at this level. */
-  function buildLeafRows(lab: Int32Array): void {
+  constructor(
+    private readonly n: number,
+    private readonly wpr: number,
+  ) {
+    this.refiner = new PartitionRefiner(n, wpr);
+    for (let l = 0; l <= n; l++) {
+      this.labs.push(new Int32Array(n));
+      this.cellStarts.push(new Int32Array(n));
+      this.cellSizes.push(new Int32Array(n));
+      this.targets.push(new Int32Array(n));
+    }
+    this.cellCounts = new Int32Array(n + 1);
+    this.curTrace = new Int32Array(n + 1);
+    this.firstCells = new Int32Array(n + 1);
+    this.firstTrace = new Int32Array(n + 1);
+    this.bestCells = new Int32Array(n + 1);
+    this.bestTrace = new Int32Array(n + 1);
+    this.curPath = new Int32Array(n);
+    this.firstPath = new Int32Array(n);
+    this.bestPath = new Int32Array(n);
+    this.firstLab = new Int32Array(n);
+    this.bestLab = new Int32Array(n);
+    this.position = new Int32Array(n);
+    this.leafRows = new Uint32Array(n * wpr);
+    this.firstRows = new Uint32Array(n * wpr);
+    this.bestRows = new Uint32Array(n * wpr);
+    this.firstPathOrbitLength = new Float64Array(n + 1);
+  }
+
+  search(rows: Uint32Array, maxNodes: number): CanonicalSearchResult {
+    const n = this.n;
+    this.rows = rows;
+    this.maxNodes = maxNodes;
+    this.nodes = 0;
+    this.firstDepth = -1;
+    this.bestDepth = -1;
+    this.generators = [];
+    this.firstPathOrbitLength.fill(1);
+    const refiner = this.refiner;
+    refiner.setUnit();
+    this.curTrace[0] = refiner.refine(rows, this.wpr);
+    this.cellCounts[0] = refiner.saveTo(this.labs[0], this.cellStarts[0], this.cellSizes[0]);
+    this.visit(0, true, true);
+
+    const labelling = new Int32Array(n);
+    for (let i = 0; i < n; i++) labelling[this.bestLab[i]] = i;
+    let groupSize = 1n;
+    for (let l = 0; l < this.firstDepth; l++) groupSize *= BigInt(this.firstPathOrbitLength[l]);
+    const generators = this.generators;
+    this.generators = [];
+    this.rows = new Uint32Array(0);
+    return {
+      labelling,
+      canonicalOrder: this.bestLab.slice(),
+      canonicalRows: this.bestRows.slice(),
+      orbits: orbitsOf(n, generators),
+      generators,
+      groupSize,
+      nodes: this.nodes,
+    };
+  }
+
+  /** Fills leafRows with the graph relabelled by the discrete partition `lab`. */
+  private buildLeafRows(lab: Int32Array): void {
+    const { n, wpr, rows, position, leafRows } = this;
     for (let i = 0; i < n; i++) position[lab[i]] = i;
     leafRows.fill(0);
     for (let i = 0; i < n; i++) {
@@ -192,8 +216,7 @@ export function canonicalSearchRows(
         let word = rows[base + k];
         while (word !== 0) {
           const low = word & -word;
-          const u = (k << 5) | (31 - Math.clz32(low));
-          const p = position[u];
+          const p = position[(k << 5) | (31 - Math.clz32(low))];
           leafRows[out + (p >>> 5)] |= 1 << (p & 31);
           word ^= low;
         }
@@ -201,15 +224,9 @@ export function canonicalSearchRows(
     }
   }
 
-  function compareRows(a: Uint32Array, b: Uint32Array): number {
-    for (let i = 0; i < a.length; i++) {
-      if (a[i] !== b[i]) return a[i] >>> 0 > b[i] >>> 0 ? 1 : -1;
-    }
-    return 0;
-  }
-
   /** Compares the current invariant sequence up to `level` with the best one. */
-  function compareWithBest(level: number): number {
+  private compareWithBest(level: number): number {
+    const { cellCounts, bestCells, curTrace, bestTrace } = this;
     for (let l = 0; l <= level; l++) {
       const ca = cellCounts[l];
       const cb = bestCells[l];
@@ -219,126 +236,169 @@ export function canonicalSearchRows(
     return 0;
   }
 
-  function equalsFirst(level: number): boolean {
-    if (level > firstDepth) return false;
-    return cellCounts[level] === firstCells[level] && curTrace[level] === firstTrace[level];
+  private equalsFirst(level: number): boolean {
+    if (level > this.firstDepth) return false;
+    return (
+      this.cellCounts[level] === this.firstCells[level] && this.curTrace[level] === this.firstTrace[level]
+    );
   }
 
-  function recordAutomorphism(fromLab: Int32Array, toLab: Int32Array): void {
-    const gen = new Int32Array(n);
-    for (let i = 0; i < n; i++) gen[fromLab[i]] = toLab[i];
-    generators.push(gen);
+  private recordAutomorphism(fromLab: Int32Array, toLab: Int32Array): void {
+    const gen = new Int32Array(this.n);
+    for (let i = 0; i < this.n; i++) gen[fromLab[i]] = toLab[i];
+    this.generators.push(gen);
   }
 
-  function commonPrefix(path: Int32Array, depth: number, level: number): number {
+  private commonPrefix(path: Int32Array, depth: number, level: number): number {
     let j = 0;
-    while (j < level && j < depth && path[j] === curPath[j]) j++;
+    while (j < level && j < depth && path[j] === this.curPath[j]) j++;
     return j;
   }
 
-  function becomeBest(level: number, lab: Int32Array): void {
-    bestDepth = level;
+  private becomeBest(level: number, lab: Int32Array): void {
+    this.bestDepth = level;
     for (let l = 0; l <= level; l++) {
-      bestTrace[l] = curTrace[l];
-      bestCells[l] = cellCounts[l];
+      this.bestTrace[l] = this.curTrace[l];
+      this.bestCells[l] = this.cellCounts[l];
     }
-    bestPath.set(curPath.subarray(0, level));
-    bestLab.set(lab);
-    bestRows.set(leafRows);
+    this.bestPath.set(this.curPath.subarray(0, level));
+    this.bestLab.set(lab);
+    this.bestRows.set(this.leafRows);
+  }
+
+  /** Orbits of the group generated by the automorphisms found that fix the first path above `level`. */
+  private stabilizerOrbits(level: number): Int32Array {
+    const firstPath = this.firstPath;
+    const fixing = this.generators.filter((gen) => {
+      for (let l = 0; l < level; l++) if (gen[firstPath[l]] !== firstPath[l]) return false;
+      return true;
+    });
+    return orbitsOf(this.n, fixing);
   }
 
   /**
    * Explores the node at `level` (its partition saved in labs[level] etc.). Returns the level
    * whose child loop should continue: level - 1 normally, less to abandon a whole subtree.
    */
-  function visit(level: number, onFirstPath: boolean, eqFirst: boolean): number {
-    if (++nodes > maxNodes) throw new CanonicalLabellingLimitError(n, maxNodes);
-    const lab = labs[level];
-    if (cellCounts[level] === n) {
-      buildLeafRows(lab);
-      if (firstDepth < 0) {
-        firstDepth = level;
-        for (let l = 0; l <= level; l++) {
-          firstTrace[l] = curTrace[l];
-          firstCells[l] = cellCounts[l];
-        }
-        firstPath.set(curPath.subarray(0, level));
-        firstLab.set(lab);
-        firstRows.set(leafRows);
-        becomeBest(level, lab);
-        return level - 1;
-      }
-      if (eqFirst && compareRows(leafRows, firstRows) === 0) {
-        recordAutomorphism(firstLab, lab);
-        return commonPrefix(firstPath, firstDepth, level);
-      }
-      const cmp = compareWithBest(level);
-      if (cmp > 0) {
-        becomeBest(level, lab);
-      } else if (cmp === 0) {
-        const rowCmp = compareRows(leafRows, bestRows);
-        if (rowCmp > 0) becomeBest(level, lab);
-        else if (rowCmp === 0) {
-          recordAutomorphism(bestLab, lab);
-          return commonPrefix(bestPath, bestDepth, level);
-        }
-      }
-      return level - 1;
-    }
+  private visit(level: number, onFirstPath: boolean, eqFirst: boolean): number {
+    const n = this.n;
+    if (++this.nodes > this.maxNodes) throw new CanonicalLabellingLimitError(n, this.maxNodes);
+    const lab = this.labs[level];
+    if (this.cellCounts[level] === n) return this.visitLeaf(level, lab, eqFirst);
 
     // Target cell: the first non-singleton cell. Copy its vertices, sorted, before descending.
-    const cellSize = cellSizes[level];
+    const cellSize = this.cellSizes[level];
     let t = 0;
     while (cellSize[t] === 1) t++;
     const targetSize = cellSize[t];
-    const target = targets[level];
+    const target = this.targets[level];
     for (let i = 0; i < targetSize; i++) target[i] = lab[t + i];
     target.subarray(0, targetSize).sort();
 
+    const refiner = this.refiner;
     let generatorsSeen = -1;
-    let stabilizerOrbits: Int32Array | null = null;
-    let firstChild = true;
+    let orbits: Int32Array | null = null;
     for (let i = 0; i < targetSize; i++) {
       const w = target[i];
-      if (onFirstPath && !firstChild) {
+      if (onFirstPath && i > 0) {
         // Skip w when an automorphism fixing the path above maps an explored child onto it.
-        if (generatorsSeen !== generators.length) {
-          const fixing = generators.filter((gen) => {
-            for (let l = 0; l < level; l++) if (gen[firstPath[l]] !== firstPath[l]) return false;
-            return true;
-          });
-          stabilizerOrbits = orbitsOf(n, fixing);
-          generatorsSeen = generators.length;
+        if (generatorsSeen !== this.generators.length) {
+          orbits = this.stabilizerOrbits(level);
+          generatorsSeen = this.generators.length;
         }
-        if (stabilizerOrbits !== null && stabilizerOrbits[w] !== w) continue;
+        if (orbits !== null && orbits[w] !== w) continue;
       }
-      refiner.loadFrom(lab, cellStarts[level], cellSizes[level], cellCounts[level]);
+      refiner.loadFrom(lab, this.cellStarts[level], cellSize, this.cellCounts[level]);
       refiner.individualize(w);
-      curTrace[level + 1] = refiner.refine(rows, wpr);
-      cellCounts[level + 1] = refiner.saveTo(labs[level + 1], cellStarts[level + 1], cellSizes[level + 1]);
-      curPath[level] = w;
-      const childEqFirst = eqFirst && equalsFirst(level + 1);
-      const childOnFirstPath = onFirstPath && firstChild;
-      firstChild = false;
-      if (!childEqFirst && !childOnFirstPath && compareWithBest(level + 1) < 0) continue;
-      const back = visit(level + 1, childOnFirstPath, childEqFirst || childOnFirstPath);
+      this.curTrace[level + 1] = refiner.refine(this.rows, this.wpr);
+      this.cellCounts[level + 1] = refiner.saveTo(
+        this.labs[level + 1],
+        this.cellStarts[level + 1],
+        this.cellSizes[level + 1],
+      );
+      this.curPath[level] = w;
+      const childOnFirstPath = onFirstPath && i === 0;
+      const childEqFirst = childOnFirstPath || (eqFirst && this.equalsFirst(level + 1));
+      if (!childEqFirst && this.compareWithBest(level + 1) < 0) continue;
+      const back = this.visit(level + 1, childOnFirstPath, childEqFirst);
       if (back < level) return back;
     }
     if (onFirstPath) {
-      const fixing = generators.filter((gen) => {
-        for (let l = 0; l < level; l++) if (gen[firstPath[l]] !== firstPath[l]) return false;
-        return true;
-      });
-      const orbits = orbitsOf(n, fixing);
-      const rep = orbits[firstPath[level]];
+      const stabilizer = this.stabilizerOrbits(level);
+      const rep = stabilizer[this.firstPath[level]];
       let length = 0;
-      for (let i = 0; i < targetSize; i++) if (orbits[target[i]] === rep) length++;
-      firstPathOrbitLength[level] = length;
+      for (let i = 0; i < targetSize; i++) if (stabilizer[target[i]] === rep) length++;
+      this.firstPathOrbitLength[level] = length;
     }
     return level - 1;
   }
 
-  if (n === 0) {
+  private visitLeaf(level: number, lab: Int32Array, eqFirst: boolean): number {
+    this.buildLeafRows(lab);
+    if (this.firstDepth < 0) {
+      this.firstDepth = level;
+      for (let l = 0; l <= level; l++) {
+        this.firstTrace[l] = this.curTrace[l];
+        this.firstCells[l] = this.cellCounts[l];
+      }
+      this.firstPath.set(this.curPath.subarray(0, level));
+      this.firstLab.set(lab);
+      this.firstRows.set(this.leafRows);
+      this.becomeBest(level, lab);
+      return level - 1;
+    }
+    if (eqFirst && compareRows(this.leafRows, this.firstRows) === 0) {
+      this.recordAutomorphism(this.firstLab, lab);
+      return this.commonPrefix(this.firstPath, this.firstDepth, level);
+    }
+    const cmp = this.compareWithBest(level);
+    if (cmp > 0) {
+      this.becomeBest(level, lab);
+    } else if (cmp === 0) {
+      const rowCmp = compareRows(this.leafRows, this.bestRows);
+      if (rowCmp > 0) this.becomeBest(level, lab);
+      else if (rowCmp === 0) {
+        this.recordAutomorphism(this.bestLab, lab);
+        return this.commonPrefix(this.bestPath, this.bestDepth, level);
+      }
+    }
+    return level - 1;
+  }
+}
+
+/** Lexicographic comparison of two row arrays as unsigned words. */
+function compareRows(a: Uint32Array, b: Uint32Array): number {
+  for (let i = 0; i < a.length; i++) {
+    if (a[i] !== b[i]) return a[i] > b[i] ? 1 : -1;
+  }
+  return 0;
+}
+
+const searchers = new Map<string, CanonicalSearcher>();
+
+function searcherFor(order: number, wordsPerRow: number): CanonicalSearcher {
+  const key = `${order}/${wordsPerRow}`;
+  let searcher = searchers.get(key);
+  if (searcher === undefined) {
+    // Orders met in one process are few; still, do not let the cache grow without bound.
+    if (searchers.size >= 64) searchers.clear();
+    searcher = new CanonicalSearcher(order, wordsPerRow);
+    searchers.set(key, searcher);
+  }
+  return searcher;
+}
+
+/**
+ * Runs the canonical labelling search on a graph given as raw bitset rows (the form the
+ * enumerator works on, without building a Graph object per candidate).
+ */
+export function canonicalSearchRows(
+  order: number,
+  rows: Uint32Array,
+  wordsPerRow: number,
+  options: CanonicalSearchOptions = {},
+): CanonicalSearchResult {
+  if (order === 0) {
     return {
       labelling: new Int32Array(0),
       canonicalOrder: new Int32Array(0),
@@ -349,24 +409,7 @@ export function canonicalSearchRows(
       nodes: 0,
     };
   }
-  refiner.setUnit();
-  curTrace[0] = refiner.refine(rows, wpr);
-  cellCounts[0] = refiner.saveTo(labs[0], cellStarts[0], cellSizes[0]);
-  visit(0, true, true);
-
-  const labelling = new Int32Array(n);
-  for (let i = 0; i < n; i++) labelling[bestLab[i]] = i;
-  let groupSize = 1n;
-  for (let l = 0; l < firstDepth; l++) groupSize *= BigInt(firstPathOrbitLength[l]);
-  return {
-    labelling,
-    canonicalOrder: bestLab.slice(),
-    canonicalRows: bestRows.slice(),
-    orbits: orbitsOf(n, generators),
-    generators,
-    groupSize,
-    nodes,
-  };
+  return searcherFor(order, wordsPerRow).search(rows, options.maxNodes ?? DEFAULT_MAX_SEARCH_NODES);
 }
 
 /**
