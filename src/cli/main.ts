@@ -8,6 +8,8 @@ import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
 import { addGenerateCommand } from './generate.js';
 import { addSweepCommand } from './sweep.js';
+import { addDrawCommand } from './draw.js';
+import { addReportCommand } from './report.js';
 import { TOOL_VERSION } from '../version.js';
 
 /** What a command's action returns: the process's exit status. */
@@ -30,6 +32,8 @@ export function buildProgram(outcome: CommandOutcome): Command {
   addInvariantsCommand(program, outcome);
   addGenerateCommand(program, outcome);
   addSweepCommand(program, outcome);
+  addDrawCommand(program, outcome);
+  addReportCommand(program, outcome);
   return program;
 }
 
@@ -50,7 +54,11 @@ export async function main(argv: string[]): Promise<number> {
       return 2;
     }
     if (isBrokenPipe(err)) return outcome.status;
-    throw err;
+    // Not the user's fault, but never exit 1 ("nothing found") on a crash.
+    const message = err instanceof Error ? err.message : String(err);
+    process.stderr.write(`refute: internal error: ${message} (set REFUTE_DEBUG=1 for the stack trace)\n`);
+    if (process.env.REFUTE_DEBUG) process.stderr.write(`${(err as Error).stack ?? ''}\n`);
+    return 2;
   }
 }
 
