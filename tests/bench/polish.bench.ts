@@ -4,13 +4,14 @@
  *
  * First the example conjectures of scores/ (Hong's bound is a true theorem with tight cases: its
  * row must stay at 0), then claims of this file, each false with counterexamples of a different
- * shape:
- * stars (spectral gap), complete bipartite graphs (energy against edges), long paths (Wiener
- * index), two dense halves joined thinly (second eigenvalue), near-complete graphs (triangles
- * against edges: t <= (sqrt 2 / 3) m^(3/2) is a theorem, tight for cliques, and 0.4 < sqrt 2 / 3
- * makes K_11 and K_12 counterexamples). Each start is a seeded G(n, 0.3);
- * each run gets `BUDGET` scored graphs (BENCH_POLISH_BUDGET, default 3000). Reported per claim: runs that refuted, and the medians
- * (over refuting runs) of graphs scored and milliseconds until the first positive score.
+ * shape: stars (spectral gap), complete bipartite graphs (energy against edges), long paths
+ * (Wiener index), two dense halves joined thinly (second eigenvalue), near-complete graphs
+ * (triangles against edges: t <= (sqrt 2 / 3) m^(3/2) is a theorem, tight for cliques, and
+ * 0.4 < sqrt 2 / 3 makes K_11 and K_12 counterexamples).
+ *
+ * Each start is a seeded G(n, 0.3); each run gets BUDGET scored graphs (BENCH_POLISH_BUDGET,
+ * default 3000). Reported per claim: runs that refuted (verdict.ts), and the medians over the
+ * refuting runs of graphs scored and milliseconds until the first refutation.
  */
 import seedrandom from 'seedrandom';
 import { fileURLToPath } from 'node:url';
