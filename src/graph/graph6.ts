@@ -132,6 +132,8 @@ export function decodeGraph6(text: string, where = 'input'): Graph {
     const kind = s[0] === '&' ? 'digraph6' : 'sparse6';
     throw new Graph6ParseError(where, `this is ${kind}, not graph6; convert it to graph6 first`);
   }
+  // Check every byte first: a stray character is a clearer diagnosis than the length it causes.
+  for (let i = 0; i < s.length; i++) sixBits(s, i, where);
   const { order: n, offset } = decodeOrder(s, where);
   if (n > DECODE_MAX_ORDER)
     throw new Graph6ParseError(where, `order ${n} exceeds the largest supported order ${DECODE_MAX_ORDER}`);
