@@ -180,12 +180,15 @@ function randicEnclosure(ctx: ExactContext): Enclosure {
   return { lo, hi };
 }
 
+/** floor(sqrt(n)) by Newton's iteration from above (exact over BigInt). */
 function isqrt(n: bigint): bigint {
   if (n < 2n) return n;
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))));
-  while (x * x > n) x--;
-  while ((x + 1n) * (x + 1n) <= n) x++;
-  return x;
+  let x = 1n << BigInt(Math.ceil(n.toString(2).length / 2)); // x >= sqrt(n)
+  for (;;) {
+    const y = (x + n / x) >> 1n;
+    if (y >= x) return x;
+    x = y;
+  }
 }
 
 function harmonicIndex(ctx: ExactContext): Rational {
