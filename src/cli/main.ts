@@ -6,6 +6,7 @@
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
+import { addCertifyCommand } from './certify.js';
 import { TOOL_VERSION } from '../version.js';
 
 /** What a command's action returns: the process's exit status. */
@@ -26,6 +27,7 @@ export function buildProgram(outcome: CommandOutcome): Command {
     .exitOverride()
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   addInvariantsCommand(program, outcome);
+  addCertifyCommand(program, outcome);
   return program;
 }
 
