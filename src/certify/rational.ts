@@ -31,6 +31,13 @@ export function rational(num: bigint | number, den: bigint | number = 1n): Ratio
     n = -n;
     d = -d;
   }
+  if ((d & (d - 1n)) === 0n) {
+    // Dyadic (every bisection point is): the gcd is the lowest set bit of n, capped by d.
+    if (n === 0n) return { num: 0n, den: 1n };
+    const low = n & -n;
+    const g = low < d ? low : d;
+    return g === 1n ? { num: n, den: d } : { num: n / g, den: d / g };
+  }
   const g = gcdBig(n, d);
   return g === 1n || g === 0n ? { num: n, den: d } : { num: n / g, den: d / g };
 }
@@ -147,10 +154,12 @@ function nextDown(x: number): number {
 /** A double within a few units in the last place of a (not yet directed). */
 function approximateDouble(a: Rational): number {
   if (a.num === 0n) return 0;
-  // Scale so that the integer quotient carries about 64 significant bits.
+  // Scale so that the integer quotient carries about 64 significant bits; apply 2^-shift in two
+  // halves so that neither factor underflows or overflows on its own (subnormal results).
   const shift = 64 - (bitLength(a.num) - bitLength(a.den));
   const q = shift >= 0 ? (a.num << BigInt(shift)) / a.den : a.num / (a.den << BigInt(-shift));
-  return Number(q) * 2 ** -shift;
+  const half = Math.trunc(shift / 2);
+  return Number(q) * 2 ** -half * 2 ** -(shift - half);
 }
 
 function bitLength(x: bigint): number {
@@ -161,11 +170,16 @@ function bitLength(x: bigint): number {
 /** The largest double <= a (-Infinity when a is below -Number.MAX_VALUE). */
 export function toDoubleBelow(a: Rational): number {
   let d = approximateDouble(a);
-  if (!Number.isFinite(d)) return d > 0 ? Number.MAX_VALUE : -Infinity;
-  while (compare(fromDouble(d), a) > 0) d = nextDown(d);
+  if (d === Infinity) d = Number.MAX_VALUE;
+  else if (d === -Infinity) d = -Number.MAX_VALUE;
+  while (compare(fromDouble(d), a) > 0) {
+    if (d === -Number.MAX_VALUE) return -Infinity;
+    d = nextDown(d);
+  }
   for (;;) {
+    if (d === Number.MAX_VALUE) return d;
     const up = nextUp(d);
-    if (!Number.isFinite(up) || compare(fromDouble(up), a) > 0) return d;
+    if (compare(fromDouble(up), a) > 0) return d;
     d = up;
   }
 }
