@@ -1,0 +1,157 @@
+/**
+ * The certified (second) computations of every invariant: agreement with the registry on the
+ * atlas of small graphs, and published or closed-form values for the hard ones.
+ *
+ * Values: Petersen graph α = 4, ω = 2, χ = 3, γ = 3, ν = 5, κ = λ' = 3, girth 5, diameter 2,
+ * τ = 2000 (D. A. Holton and J. Sheehan, "The Petersen Graph", CUP 1993; τ from memory);
+ * Cayley's formula τ(K_n) = n^(n-2); τ(K_(p,q)) = p^(q-1) q^(p-1) (Scoins 1962); τ(C_n) = n;
+ * ν(P_n) = ν(C_n) = ⌊n/2⌋; ν(K_(p,q)) = min(p, q); χ(C_n) = 2 or 3 by parity; κ(K_n) = n - 1.
+ */
+import { readFileSync } from 'node:fs';
+import { describe, expect, test } from 'vitest';
+import { decodeGraph6 } from '../../src/graph/graph6.js';
+import * as F from '../../src/graph/families.js';
+import { complement } from '../../src/graph/builders.js';
+import { InvariantMemo, invariantNames } from '../../src/invariants/registry.js';
+import { ExactContext, certifiableInvariantNames, certifyInvariant } from '../../src/certify/certified-invariants.js';
+import {
+  chromaticNumberExhaustive,
+  cliqueNumberExhaustive,
+  dominationNumberExhaustive,
+  edgeConnectivityExhaustive,
+  independenceNumberExhaustive,
+  matchingNumberByTutteRank,
+  matchingNumberExhaustive,
+  vertexConnectivityExhaustive,
+} from '../../src/certify/independent/exhaustive.js';
+import { toDoubleAbove, toDoubleBelow } from '../../src/certify/rational.js';
+import { randomGraph, seededRng } from '../support/random-graph.js';
+
+function exactValue(g: ReturnType<typeof decodeGraph6>, name: string): unknown {
+  const c = certifyInvariant(new ExactContext(g, 50), name);
+  if (c.status !== 'exact') throw new Error(`${name}: expected an exact value but found ${c.status}`);
+  return c.value;
+}
+
+describe('certifyInvariant() against the registry', () => {
+  const lines = readFileSync(new URL('../fixtures/atlas-1-7.g6', import.meta.url), 'utf8').trim().split('\n');
+  // Every graph on 1..6 vertices and every 5th on 7: the registry's algorithms are independent of these.
+  const sample = lines.filter((l, i) => decodeGraph6(l).order < 7 || i % 5 === 0);
+
+  test('every registry invariant has a certification entry', () => {
+    const certifiable = new Set(certifiableInvariantNames());
+    expect(invariantNames().filter((n) => !certifiable.has(n))).toEqual([]);
+  });
+
+  test('exact values equal the registry, enclosures contain its floats (1e-9)', () => {
+    let exactCount = 0;
+    let enclosedCount = 0;
+    for (const line of sample) {
+      const g = decodeGraph6(line);
+      const memo = new InvariantMemo(g);
+      const ctx = new ExactContext(g, 50);
+      for (const name of invariantNames()) {
+        let registry: unknown;
+        try {
+          registry = memo.get(name);
+        } catch {
+          continue; // outside the invariant's domain (distance spectra of disconnected graphs)
+        }
+        const c = certifyInvariant(ctx, name);
+        if (c.status === 'exact') {
+          const norm = (v: unknown) => JSON.stringify(v, (_k, x) => (typeof x === 'bigint' ? x.toString() : x));
+          expect(norm(c.value), `${name} of ${line}`).toBe(norm(registry));
+          exactCount++;
+        } else if (c.status === 'enclosed') {
+          const floats = c.isList ? (registry as number[]) : [registry as number];
+          expect(floats.length, `${name} of ${line}`).toBe(c.enclosures.length);
+          c.enclosures.forEach((e, i) => {
+            expect(floats[i], `${name}[${i}] of ${line}`).toBeGreaterThanOrEqual(toDoubleBelow(e.lo) - 1e-9);
+            expect(floats[i], `${name}[${i}] of ${line}`).toBeLessThanOrEqual(toDoubleAbove(e.hi) + 1e-9);
+          });
+          enclosedCount++;
+        } else {
+          expect(name, `${name} of ${line} unconfirmed: ${c.reason}`).toBe('estradaIndex');
+        }
+      }
+    }
+    expect(exactCount).toBeGreaterThan(1000);
+    expect(enclosedCount).toBeGreaterThan(1000);
+  });
+});
+
+describe('second algorithms on named graphs', () => {
+  test('Petersen graph values', () => {
+    const p = F.petersen();
+    expect(independenceNumberExhaustive(p)).toBe(4);
+    expect(cliqueNumberExhaustive(p)).toBe(2);
+    expect(chromaticNumberExhaustive(p)).toBe(3);
+    expect(dominationNumberExhaustive(p)).toBe(3);
+    expect(matchingNumberExhaustive(p)).toBe(5);
+    expect(vertexConnectivityExhaustive(p)).toBe(3);
+    expect(edgeConnectivityExhaustive(p)).toBe(3);
+    expect(exactValue(p, 'girth')).toBe(5);
+    expect(exactValue(p, 'diameter')).toBe(2);
+    expect(exactValue(p, 'spanningTreeCount')).toBe(2000);
+  });
+
+  test('spanning trees: Cayley n^(n-2), K_(p,q): p^(q-1) q^(p-1), C_n: n, disconnected: 0', () => {
+    for (let n = 1; n <= 12; n++) expect(BigInt(exactValue(F.complete(n), 'spanningTreeCount') as number)).toBe(BigInt(n) ** BigInt(Math.max(0, n - 2)));
+    // K_20: 20^18 > 2^53, returned as a bigint.
+    expect(exactValue(F.complete(20), 'spanningTreeCount')).toBe(20n ** 18n);
+    for (let p = 1; p <= 5; p++)
+      for (let q = 1; q <= 5; q++) expect(exactValue(F.completeBipartite(p, q), 'spanningTreeCount')).toBe(p ** (q - 1) * q ** (p - 1));
+    for (let n = 3; n <= 12; n++) expect(exactValue(F.cycle(n), 'spanningTreeCount')).toBe(n);
+    expect(exactValue(F.emptyGraph(3), 'spanningTreeCount')).toBe(0);
+  });
+
+  test('chromatic numbers of cycles, complete and complete multipartite graphs', () => {
+    for (let n = 3; n <= 15; n++) expect(chromaticNumberExhaustive(F.cycle(n))).toBe(n % 2 === 0 ? 2 : 3);
+    for (let n = 1; n <= 12; n++) expect(chromaticNumberExhaustive(F.complete(n))).toBe(n);
+    expect(chromaticNumberExhaustive(F.completeMultipartite([2, 3, 4, 1]))).toBe(4);
+    expect(chromaticNumberExhaustive(F.emptyGraph(5))).toBe(1);
+  });
+
+  test('connectivity conventions: K_n gives n - 1, disconnected 0, n = 1 gives 0', () => {
+    for (let n = 2; n <= 10; n++) {
+      expect(vertexConnectivityExhaustive(F.complete(n))).toBe(n - 1);
+      expect(edgeConnectivityExhaustive(F.complete(n))).toBe(n - 1);
+    }
+    expect(vertexConnectivityExhaustive(F.emptyGraph(4))).toBe(0);
+    expect(edgeConnectivityExhaustive(F.emptyGraph(4))).toBe(0);
+    expect(vertexConnectivityExhaustive(F.complete(1))).toBe(0);
+    expect(vertexConnectivityExhaustive(F.star(6))).toBe(1);
+    expect(edgeConnectivityExhaustive(F.cycle(9))).toBe(2);
+  });
+
+  test('identities: α(G) = ω(Ḡ); Whitney κ <= λ\' <= δ (seeded random graphs)', () => {
+    const rng = seededRng('certify-identities');
+    for (let t = 0; t < 25; t++) {
+      const g = randomGraph(5 + Math.floor(rng() * 9), 0.2 + 0.6 * rng(), rng);
+      expect(independenceNumberExhaustive(g)).toBe(cliqueNumberExhaustive(complement(g)));
+      const kappa = vertexConnectivityExhaustive(g)!;
+      const lambda = edgeConnectivityExhaustive(g)!;
+      expect(kappa).toBeLessThanOrEqual(lambda);
+      expect(lambda).toBeLessThanOrEqual(Math.min(...g.degrees));
+    }
+  });
+});
+
+describe('matchingNumberByTutteRank()', () => {
+  test('agrees with the subset dynamic programme on seeded random graphs', () => {
+    const rng = seededRng('tutte-vs-dp');
+    for (let t = 0; t < 30; t++) {
+      const g = randomGraph(4 + Math.floor(rng() * 12), 0.05 + 0.5 * rng(), rng);
+      expect(matchingNumberByTutteRank(g)).toBe(matchingNumberExhaustive(g));
+    }
+  });
+
+  test('closed forms above the exhaustive limit: ⌊n/2⌋ for paths and cycles, min(p, q) for K_(p,q)', () => {
+    for (const n of [21, 30, 41]) {
+      expect(matchingNumberByTutteRank(F.path(n))).toBe(Math.floor(n / 2));
+      expect(matchingNumberByTutteRank(F.cycle(n))).toBe(Math.floor(n / 2));
+    }
+    expect(matchingNumberByTutteRank(F.completeBipartite(7, 19))).toBe(7);
+    expect(matchingNumberByTutteRank(F.star(30))).toBe(1);
+  });
+});
