@@ -7,6 +7,9 @@ import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
 import { addCertifyCommand } from './certify.js';
+import { addCheckCommand } from './check.js';
+import { addDrawCommand } from './draw.js';
+import { addReportCommand } from './report.js';
 import { TOOL_VERSION } from '../version.js';
 
 /** What a command's action returns: the process's exit status. */
@@ -27,7 +30,10 @@ export function buildProgram(outcome: CommandOutcome): Command {
     .exitOverride()
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   addInvariantsCommand(program, outcome);
+  addCheckCommand(program, outcome);
   addCertifyCommand(program, outcome);
+  addDrawCommand(program, outcome);
+  addReportCommand(program, outcome);
   return program;
 }
 
@@ -48,7 +54,11 @@ export async function main(argv: string[]): Promise<number> {
       return 2;
     }
     if (isBrokenPipe(err)) return outcome.status;
-    throw err;
+    // Not the user's fault, but never exit 1 ("nothing found") on a crash.
+    const message = err instanceof Error ? err.message : String(err);
+    process.stderr.write(`refute: internal error: ${message} (set REFUTE_DEBUG=1 for the stack trace)\n`);
+    if (process.env.REFUTE_DEBUG) process.stderr.write(`${(err as Error).stack ?? ''}\n`);
+    return 2;
   }
 }
 
