@@ -106,7 +106,8 @@ export class ExactContext {
     if (this.laplacianPolynomial === undefined) {
       const cached = this.spectra.get('laplacian');
       this.laplacianPolynomial =
-        cached?.evidence.characteristicPolynomial ?? characteristicPolynomial(integerGraphMatrix(this.graph, 'laplacian'));
+        cached?.evidence.characteristicPolynomial ??
+        characteristicPolynomial(integerGraphMatrix(this.graph, 'laplacian'));
     }
     return this.laplacianPolynomial;
   }
@@ -151,8 +152,23 @@ function spectral(
     }
     const s = ctx.spectrum(matrix);
     const method = SPECTRAL_METHOD(matrix);
-    if (pick === 'all') return { name, status: 'enclosed', enclosures: s.eigenvalues, isList: true, method, evidence: s.evidence };
-    return { name, status: 'enclosed', enclosures: [pick(s.eigenvalues, ctx.graph.order)], isList: false, method, evidence: s.evidence };
+    if (pick === 'all')
+      return {
+        name,
+        status: 'enclosed',
+        enclosures: s.eigenvalues,
+        isList: true,
+        method,
+        evidence: s.evidence,
+      };
+    return {
+      name,
+      status: 'enclosed',
+      enclosures: [pick(s.eigenvalues, ctx.graph.order)],
+      isList: false,
+      method,
+      evidence: s.evidence,
+    };
   };
 }
 
@@ -216,20 +232,36 @@ const CERTIFIERS: Record<string, Certifier> = {
   size: exact('edges counted over all vertex pairs', (c) => pairEdges(c.graph).length),
   minDegree: exact('degrees counted over all vertex pairs', (c) => Math.min(...c.degrees())),
   maxDegree: exact('degrees counted over all vertex pairs', (c) => Math.max(0, ...c.degrees())),
-  averageDegree: rationalValued('2m/n exactly', (c) => rational(2 * pairEdges(c.graph).length, c.graph.order)),
-  degreeSequence: exact('degrees counted over all vertex pairs', (c) => [...c.degrees()].sort((a, b) => b - a)),
+  averageDegree: rationalValued('2m/n exactly', (c) =>
+    rational(2 * pairEdges(c.graph).length, c.graph.order),
+  ),
+  degreeSequence: exact('degrees counted over all vertex pairs', (c) =>
+    [...c.degrees()].sort((a, b) => b - a),
+  ),
   componentCount: exact('union–find over the edges', (c) => c.componentCount()),
   isConnected: exact('union–find over the edges', (c) => c.componentCount() === 1),
   isBipartite: exact('symmetry of the exact adjacency characteristic polynomial (Sachs)', (c) =>
-    isBipartiteByCharacteristicPolynomial(c.spectrum('adjacency').evidence.characteristicPolynomial, c.graph.order),
+    isBipartiteByCharacteristicPolynomial(
+      c.spectrum('adjacency').evidence.characteristicPolynomial,
+      c.graph.order,
+    ),
   ),
-  isTree: exact('union–find over the edges', (c) => c.componentCount() === 1 && pairEdges(c.graph).length === c.graph.order - 1),
-  isForest: exact('union–find over the edges', (c) => pairEdges(c.graph).length === c.graph.order - c.componentCount()),
+  isTree: exact(
+    'union–find over the edges',
+    (c) => c.componentCount() === 1 && pairEdges(c.graph).length === c.graph.order - 1,
+  ),
+  isForest: exact(
+    'union–find over the edges',
+    (c) => pairEdges(c.graph).length === c.graph.order - c.componentCount(),
+  ),
   diameter: exact('Floyd–Warshall distances', (c) => c.distanceFacts().diameter),
   radius: exact('Floyd–Warshall distances', (c) => c.distanceFacts().radius),
   girth: exact('shortest cycle through each edge, by deleting it', (c) => girthByEdgeDeletion(c.graph)),
   wienerIndex: exact('Floyd–Warshall distances', (c) => c.distanceFacts().wienerIndex),
-  averageDistance: rationalValued('Floyd–Warshall distances, exact ratio', (c) => c.distanceFacts().averageDistance),
+  averageDistance: rationalValued(
+    'Floyd–Warshall distances, exact ratio',
+    (c) => c.distanceFacts().averageDistance,
+  ),
   transmissions: exact('Floyd–Warshall distances', (c) => c.distanceFacts().transmissions),
   proximity: rationalValued('Floyd–Warshall distances, exact ratio', (c) => c.distanceFacts().proximity),
   remoteness: rationalValued('Floyd–Warshall distances, exact ratio', (c) => c.distanceFacts().remoteness),
@@ -266,7 +298,11 @@ const CERTIFIERS: Record<string, Certifier> = {
     `dynamic programming over vertex subsets (orders <= ${EXHAUSTIVE_MAX_ORDER}), else the rank of the Tutte matrix at seeded random points (Lovász)`,
     (c) => matchingNumberSecondMethod(c.graph),
   ),
-  independenceNumber: exact(HARD, (c) => independenceNumberExhaustive(c.graph), tooLarge('independenceNumber')),
+  independenceNumber: exact(
+    HARD,
+    (c) => independenceNumberExhaustive(c.graph),
+    tooLarge('independenceNumber'),
+  ),
   cliqueNumber: exact(HARD, (c) => cliqueNumberExhaustive(c.graph), tooLarge('cliqueNumber')),
   chromaticNumber: exact(
     `inclusion–exclusion over independent sets (Björklund–Husfeldt–Koivisto; orders <= ${EXHAUSTIVE_MAX_ORDER})`,
@@ -275,18 +311,25 @@ const CERTIFIERS: Record<string, Certifier> = {
   ),
   dominationNumber: exact(HARD, (c) => dominationNumberExhaustive(c.graph), tooLarge('dominationNumber')),
   vertexCoverNumber: exact(HARD, (c) => vertexCoverNumberExhaustive(c.graph), tooLarge('vertexCoverNumber')),
-  vertexConnectivity: exact(HARD, (c) => vertexConnectivityExhaustive(c.graph), tooLarge('vertexConnectivity')),
+  vertexConnectivity: exact(
+    HARD,
+    (c) => vertexConnectivityExhaustive(c.graph),
+    tooLarge('vertexConnectivity'),
+  ),
   edgeConnectivity: exact(
     `smallest edge cut over all vertex bipartitions (orders <= ${EXHAUSTIVE_MAX_ORDER})`,
     (c) => edgeConnectivityExhaustive(c.graph),
     tooLarge('edgeConnectivity'),
   ),
   triangleCount: exact('all vertex triples', (c) => triangleCountByTriples(c.graph)),
-  spanningTreeCount: exact("the x coefficient of the Laplacian's exact characteristic polynomial (matrix-tree theorem)", (c) =>
-    spanningTreeCountByCharPoly(c),
+  spanningTreeCount: exact(
+    "the x coefficient of the Laplacian's exact characteristic polynomial (matrix-tree theorem)",
+    (c) => spanningTreeCountByCharPoly(c),
   ),
   bridgeCount: exact('deleting each edge and recounting components', (c) => bridgeCountByDeletion(c.graph)),
-  cutVertexCount: exact('deleting each vertex and recounting components', (c) => cutVertexCountByDeletion(c.graph)),
+  cutVertexCount: exact('deleting each vertex and recounting components', (c) =>
+    cutVertexCountByDeletion(c.graph),
+  ),
   randicIndex: (ctx, name) => ({
     name,
     status: 'enclosed',
@@ -307,6 +350,7 @@ export function certifiableInvariantNames(): string[] {
 /** The certified value of one invariant of ctx.graph (name as in the registry). */
 export function certifyInvariant(ctx: ExactContext, name: string): CertifiedInvariant {
   const certifier = CERTIFIERS[name];
-  if (certifier === undefined) return { name, status: 'unconfirmed', reason: `${name} has no certification method` };
+  if (certifier === undefined)
+    return { name, status: 'unconfirmed', reason: `${name} has no certification method` };
   return certifier(ctx, name);
 }

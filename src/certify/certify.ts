@@ -70,7 +70,8 @@ export const DEFAULT_CERTIFICATION_BITS = 64;
 /** Relative tolerance within which a registry float must agree with its certified interval. */
 const FLOAT_AGREEMENT = 1e-6;
 
-export type Verdict = 'certified' | 'holds' | 'equality' | 'numerical-only' | 'outside-domain' | 'disagreement';
+export type Verdict =
+  'certified' | 'holds' | 'equality' | 'numerical-only' | 'outside-domain' | 'disagreement';
 
 /** One input of the score, as certified, with the registry's float value beside it. */
 export type CertifiedInput = CertifiedInvariant & {
@@ -126,8 +127,13 @@ interface RealInput {
 
 type PointResult = { ok: true; evaluation: Evaluation; magnitude: number } | { ok: false; message: string };
 
+/** A comparable form of a value: bigints below 2^53 as numbers (the registry switches representation there). */
 function normalise(v: unknown): string {
-  return JSON.stringify(v, (_k, x) => (typeof x === 'bigint' ? x.toString() : typeof x === 'number' && !Number.isFinite(x) ? String(x) : x));
+  return JSON.stringify(v, (_k, x: unknown) => {
+    if (typeof x === 'bigint') return x <= BigInt(Number.MAX_SAFE_INTEGER) ? Number(x) : x.toString();
+    if (typeof x === 'number' && !Number.isFinite(x)) return String(x);
+    return x;
+  });
 }
 
 function floatOf(view: GraphView, key: string): InvariantValue | undefined {
@@ -154,7 +160,11 @@ function disagreementOf(c: CertifiedInput): string | undefined {
     }
   } else if (c.status === 'enclosed') {
     const floats = c.isList ? (c.floatValue as readonly number[]) : [c.floatValue as number];
-    if (!Array.isArray(floats) || floats.length !== c.enclosures.length || !c.enclosures.every((e, i) => agrees(e, floats[i]))) {
+    if (
+      !Array.isArray(floats) ||
+      floats.length !== c.enclosures.length ||
+      !c.enclosures.every((e, i) => agrees(e, floats[i]))
+    ) {
       return `${c.key}: the registry's float value ${normalise(c.floatValue)} lies outside the certified enclosure`;
     }
   }
@@ -167,12 +177,22 @@ function realInputsOf(c: CertifiedInput): RealInput[] {
     const loD = toDoubleBelow(e.lo);
     const hiD = toDoubleAbove(e.hi);
     const r = BOX_RADIUS * Math.max(1, Math.abs(loD), Math.abs(hiD));
-    return { key: c.key, index: c.isList ? i : -1, low: loD - r, high: hiD + r, centre: toDouble(midpoint(e.lo, e.hi)) };
+    return {
+      key: c.key,
+      index: c.isList ? i : -1,
+      low: loD - r,
+      high: hiD + r,
+      centre: toDouble(midpoint(e.lo, e.hi)),
+    };
   });
 }
 
 /** Override values for one point: `choice[j]` is -1 (low), 0 (centre) or 1 (high) for real input j. */
-function overridesAt(inputs: readonly CertifiedInput[], reals: readonly RealInput[], choice: readonly number[]): Map<string, unknown> {
+function overridesAt(
+  inputs: readonly CertifiedInput[],
+  reals: readonly RealInput[],
+  choice: readonly number[],
+): Map<string, unknown> {
   const out = new Map<string, unknown>();
   for (const c of inputs) {
     if (c.status === 'exact') out.set(c.key, c.value);
@@ -223,7 +243,8 @@ function evaluatePoints(
   }
   results.push(evaluate(down), evaluate(down.map((d) => -d)));
   if (k <= MAX_FULL_CORNER_INPUTS) {
-    for (let mask = 0; mask < 1 << k; mask++) results.push(evaluate(Array.from({ length: k }, (_, j) => ((mask >> j) & 1 ? 1 : -1))));
+    for (let mask = 0; mask < 1 << k; mask++)
+      results.push(evaluate(Array.from({ length: k }, (_, j) => ((mask >> j) & 1 ? 1 : -1))));
   }
   return { results, centre };
 }
@@ -267,7 +288,11 @@ export function certifyCounterexample(c: Conjecture, g: Graph, options: CertifyO
       const overrides = overridesAt(inputs, reals, choice);
       try {
         const evaluation = evaluateOnView(c, g, substitutedView(base, overrides, reads));
-        return { ok: true, evaluation, magnitude: magnitudeOf(overrides.values(), evaluation.inDomain ? evaluation.score : undefined) };
+        return {
+          ok: true,
+          evaluation,
+          magnitude: magnitudeOf(overrides.values(), evaluation.inDomain ? evaluation.score : undefined),
+        };
       } catch (err) {
         return { ok: false, message: err instanceof Error ? err.message : String(err) };
       }
@@ -288,7 +313,9 @@ function decide(
   const numerical = inputs.filter((i) => i.status === 'unconfirmed').map((i) => i.key);
   const { results, centre } = outcome;
   const failures = results.filter((r): r is { ok: false; message: string } => !r.ok);
-  const evaluations = results.filter((r): r is { ok: true; evaluation: Evaluation; magnitude: number } => r.ok);
+  const evaluations = results.filter(
+    (r): r is { ok: true; evaluation: Evaluation; magnitude: number } => r.ok,
+  );
   const inDomain = evaluations.filter((r) => r.evaluation.inDomain).length;
   const scores = evaluations.flatMap((r) => (r.evaluation.inDomain ? [r.evaluation.score] : []));
   const tau = ROUNDING_ALLOWANCE * Math.max(1, ...evaluations.map((r) => r.magnitude));
@@ -309,10 +336,11 @@ function decide(
     reason = `the score cannot be evaluated throughout the certified box: ${failures[0].message}`;
   } else if (inDomain === 0) {
     verdict = 'outside-domain';
-    reason = 'the graph is outside the conjecture\'s domain (connected / where) at every certified point';
+    reason = "the graph is outside the conjecture's domain (connected / where) at every certified point";
   } else if (inDomain < results.length) {
     verdict = 'numerical-only';
-    reason = 'whether the graph is in the domain (where) depends on rounding: it holds at some certified points and not at others';
+    reason =
+      'whether the graph is in the domain (where) depends on rounding: it holds at some certified points and not at others';
   } else if (lower! > tau) {
     verdict = numerical.length > 0 ? 'numerical-only' : 'certified';
     reason =

@@ -30,7 +30,8 @@ export function intMatrix(rows: ReadonlyArray<ReadonlyArray<number | bigint>>): 
   const n = rows.length;
   const entries: bigint[] = [];
   for (const row of rows) {
-    if (row.length !== n) throw new RangeError(`Expected a square matrix but found a row of length ${row.length} in ${n} rows`);
+    if (row.length !== n)
+      throw new RangeError(`Expected a square matrix but found a row of length ${row.length} in ${n} rows`);
     for (const x of row) entries.push(BigInt(x));
   }
   return { n, entries };
@@ -98,7 +99,8 @@ export function characteristicPolynomialFaddeevLeVerrier(m: IntMatrix): IntPolyn
     // c_(n-k) = -tr(A M_k) / k
     let trace = 0n;
     for (let i = 0; i < n; i++) for (let l = 0; l < n; l++) trace += a[i * n + l] * mk[l * n + i];
-    if (trace % BigInt(k) !== 0n) throw new Error(`Faddeev–LeVerrier: trace not divisible by ${k} (not an integer matrix?)`);
+    if (trace % BigInt(k) !== 0n)
+      throw new Error(`Faddeev–LeVerrier: trace not divisible by ${k} (not an integer matrix?)`);
     c[n - k] = -trace / BigInt(k);
   }
   return polynomial(c);

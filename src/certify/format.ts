@@ -6,7 +6,13 @@
 import { formatNumber } from '../invariants/encode.js';
 import { type Certificate, type CertifiedInput, type Verdict } from './certify.js';
 import { degree, formatPolynomial, type IntPolynomial } from './polynomial.js';
-import { type Rational, compare, formatDecimalAbove, formatDecimalBelow, formatRational } from './rational.js';
+import {
+  type Rational,
+  compare,
+  formatDecimalAbove,
+  formatDecimalBelow,
+  formatRational,
+} from './rational.js';
 import { type Enclosure, type SpectrumEvidence } from './spectral-enclosures.js';
 
 const VERDICT_TEXT: Record<Verdict, string> = {
@@ -19,7 +25,7 @@ const VERDICT_TEXT: Record<Verdict, string> = {
 };
 
 /** Digits after the point in the human form of an enclosure (rounded outward, so still an enclosure). */
-const DIGITS = 15;
+const DIGITS = 20;
 
 function isPoint(e: Enclosure): boolean {
   return compare(e.lo, e.hi) === 0;
@@ -84,7 +90,9 @@ function inputLines(c: CertifiedInput, seenPolynomials: Set<string>): string[] {
     return lines;
   }
   if (c.status === 'exact') {
-    lines.push(`    ${c.key} = ${formatFloat(c.value)}  exact (registry ${formatFloat(c.floatValue)}; second method: ${c.method})`);
+    lines.push(
+      `    ${c.key} = ${formatFloat(c.value)}  exact (registry ${formatFloat(c.floatValue)}; second method: ${c.method})`,
+    );
   } else if (c.isList) {
     lines.push(`    ${c.key}  certified, one enclosure per entry (registry ${formatFloat(c.floatValue)}):`);
     for (const e of c.enclosures) lines.push(`        ${formatEnclosure(e)}`);
@@ -97,14 +105,21 @@ function inputLines(c: CertifiedInput, seenPolynomials: Set<string>): string[] {
   if (ev !== undefined) {
     const id = `${c.key.startsWith('complement.') ? 'complement ' : ''}${ev.matrix}`;
     if (seenPolynomials.has(id)) {
-      lines.push(`      (characteristic polynomial of ${c.key.startsWith('complement.') ? "the complement's " : ''}${matrixName(ev)} as above)`);
+      lines.push(
+        `      (characteristic polynomial of ${c.key.startsWith('complement.') ? "the complement's " : ''}${matrixName(ev)} as above)`,
+      );
     } else {
       seenPolynomials.add(id);
       const of = c.key.startsWith('complement.') ? " of the complement's" : ' of';
       lines.push(`      det(xI - M)${of} M = ${matrixName(ev)}:`);
       lines.push(`        ${formatPolynomial(ev.characteristicPolynomial)}`);
-      lines.push(`        = ${formatFactorisation(ev.squareFreeFactors)}  (square-free factors; exponent = multiplicity)`);
-      if (ev.scale !== 1n) lines.push(`        eigenvalues = roots / ${ev.scale}${ev.extraZeros > 0 ? `, plus 0 for each of ${ev.extraZeros} isolated vertices` : ''}`);
+      lines.push(
+        `        = ${formatFactorisation(ev.squareFreeFactors)}  (square-free factors; exponent = multiplicity)`,
+      );
+      if (ev.scale !== 1n)
+        lines.push(
+          `        eigenvalues = roots / ${ev.scale}${ev.extraZeros > 0 ? `, plus 0 for each of ${ev.extraZeros} isolated vertices` : ''}`,
+        );
     }
   }
   return lines;
@@ -116,7 +131,9 @@ export function formatCertificate(cert: Certificate): string {
   lines.push(`certificate: conjecture '${cert.conjecture}', graph ${cert.graph6}`);
   lines.push(`  claim     ${cert.statement}`);
   lines.push(`  graph     n = ${cert.order}, m = ${cert.size}`);
-  lines.push(`  edges     ${cert.edges.length === 0 ? '(none)' : cert.edges.map(([u, v]) => `${u}-${v}`).join(' ')}`);
+  lines.push(
+    `  edges     ${cert.edges.length === 0 ? '(none)' : cert.edges.map(([u, v]) => `${u}-${v}`).join(' ')}`,
+  );
   lines.push(`  verdict   ${VERDICT_TEXT[cert.verdict]}`);
   lines.push(`  why       ${cert.reason}`);
   if (cert.floatScore !== null || cert.lowerScore !== null) {
@@ -155,7 +172,8 @@ function enclosureJson(e: Enclosure): Record<string, string> {
 
 function valueJson(v: unknown): unknown {
   if (typeof v === 'bigint') return v.toString();
-  if (typeof v === 'number' && !Number.isFinite(v)) return Number.isNaN(v) ? 'NaN' : v > 0 ? 'Infinity' : '-Infinity';
+  if (typeof v === 'number' && !Number.isFinite(v))
+    return Number.isNaN(v) ? 'NaN' : v > 0 ? 'Infinity' : '-Infinity';
   if (Array.isArray(v)) return v.map(valueJson);
   return v;
 }
@@ -172,7 +190,10 @@ function inputJson(c: CertifiedInput): Record<string, unknown> {
   }
   out.method = c.method;
   if (c.status === 'exact') out.value = valueJson(c.value);
-  else out[c.isList ? 'enclosures' : 'enclosure'] = c.isList ? c.enclosures.map(enclosureJson) : enclosureJson(c.enclosures[0]);
+  else
+    out[c.isList ? 'enclosures' : 'enclosure'] = c.isList
+      ? c.enclosures.map(enclosureJson)
+      : enclosureJson(c.enclosures[0]);
   if (c.evidence !== undefined) {
     out.characteristicPolynomial = {
       matrix: c.evidence.matrix,

@@ -13,7 +13,8 @@ import { type Graph, hasEdge, neighbors } from '../graph/graph.js';
 import { type IntMatrix } from './characteristic-polynomial.js';
 
 /** Which integer matrix of the graph. */
-export type IntegerGraphMatrix = 'adjacency' | 'laplacian' | 'signlessLaplacian' | 'distance' | 'distanceLaplacian';
+export type IntegerGraphMatrix =
+  'adjacency' | 'laplacian' | 'signlessLaplacian' | 'distance' | 'distanceLaplacian';
 
 /** All-pairs distances by BFS from each vertex, row-major; -1 where unreachable. */
 export function bfsDistances(g: Graph): Int32Array {
@@ -57,7 +58,8 @@ export function integerGraphMatrix(g: Graph, kind: IntegerGraphMatrix): IntMatri
   if (kind === 'distance' || kind === 'distanceLaplacian') {
     const d = bfsDistances(g);
     for (let i = 0; i < n * n; i++)
-      if (d[i] < 0) throw new RangeError('Expected a connected graph for a distance matrix but found a disconnected one');
+      if (d[i] < 0)
+        throw new RangeError('Expected a connected graph for a distance matrix but found a disconnected one');
     for (let u = 0; u < n; u++) {
       let transmission = 0n;
       for (let v = 0; v < n; v++) {

@@ -190,7 +190,10 @@ export function refineIsolatingInterval(
   }
 }
 
-function multiplicityOf(factors: readonly IntPolynomial[], r: { lo: Rational; hi: Rational; exact: boolean }): number {
+function multiplicityOf(
+  factors: readonly IntPolynomial[],
+  r: { lo: Rational; hi: Rational; exact: boolean },
+): number {
   for (let i = 0; i < factors.length; i++) {
     const f = factors[i];
     if (degree(f) <= 0) continue;

@@ -58,7 +58,11 @@ function expand(isolation: RootIsolation, scale: bigint, extraZeros: number): En
 }
 
 /** The certified spectrum of an integer matrix of g, each eigenvalue within 2^-bits. */
-export function certifiedSpectrum(g: Graph, matrix: IntegerGraphMatrix | 'normalizedLaplacian', bits: number): CertifiedSpectrum {
+export function certifiedSpectrum(
+  g: Graph,
+  matrix: IntegerGraphMatrix | 'normalizedLaplacian',
+  bits: number,
+): CertifiedSpectrum {
   let poly: IntPolynomial;
   let scale = 1n;
   let extraZeros = 0;
@@ -74,10 +78,13 @@ export function certifiedSpectrum(g: Graph, matrix: IntegerGraphMatrix | 'normal
   }
   // Refine ℓ-times-wider roots a little more so that the scaled intervals still meet 2^-bits.
   const extraBits = scale.toString(2).length;
-  const isolation = size === 0 ? { squareFree: [1n], factors: [], roots: [] } : isolateRealRoots(poly, bits + extraBits);
+  const isolation =
+    size === 0 ? { squareFree: [1n], factors: [], roots: [] } : isolateRealRoots(poly, bits + extraBits);
   const total = isolation.roots.reduce((s, r) => s + r.multiplicity, 0);
   if (total !== size) {
-    throw new Error(`certified spectrum of the ${matrix} matrix: found ${total} real roots for order ${size} (internal error)`);
+    throw new Error(
+      `certified spectrum of the ${matrix} matrix: found ${total} real roots for order ${size} (internal error)`,
+    );
   }
   const eigenvalues = expand(isolation, scale, extraZeros);
   return {

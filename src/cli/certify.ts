@@ -30,7 +30,9 @@ export function addCertifyCommand(program: Command, outcome: CommandOutcome): vo
     .option('--json', 'one JSON object per graph and line')
     .action(async (file: string, graphs: string[], opts: CertifyOptions) => {
       if (graphs.length === 0) {
-        throw new InputError(`no graphs given: pass graph6 strings after the file (example: refute certify ${file} 'DhC')`);
+        throw new InputError(
+          `no graphs given: pass graph6 strings after the file (example: refute certify ${file} 'DhC')`,
+        );
       }
       const decoded = graphs.map((text, i) => decodeGraph6(text, `argument ${i + 2}`));
       const conjecture = selectConjecture(await loadConjectureFile(file), opts.conjecture);
@@ -38,7 +40,9 @@ export function addCertifyCommand(program: Command, outcome: CommandOutcome): vo
       const certificates = decoded.map((g) => certifyCounterexample(conjecture, g));
       let text = '';
       certificates.forEach((cert, i) => {
-        text += opts.json ? JSON.stringify(certificateToJson(cert)) + '\n' : (i > 0 ? '\n' : '') + formatCertificate(cert);
+        text += opts.json
+          ? JSON.stringify(certificateToJson(cert)) + '\n'
+          : (i > 0 ? '\n' : '') + formatCertificate(cert);
       });
       await writeOut(text);
       outcome.status = certificates.some((c) => c.certified) ? 0 : 1;

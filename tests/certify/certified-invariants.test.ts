@@ -13,7 +13,11 @@ import { decodeGraph6 } from '../../src/graph/graph6.js';
 import * as F from '../../src/graph/families.js';
 import { complement } from '../../src/graph/builders.js';
 import { InvariantMemo, invariantNames } from '../../src/invariants/registry.js';
-import { ExactContext, certifiableInvariantNames, certifyInvariant } from '../../src/certify/certified-invariants.js';
+import {
+  ExactContext,
+  certifiableInvariantNames,
+  certifyInvariant,
+} from '../../src/certify/certified-invariants.js';
 import {
   chromaticNumberExhaustive,
   cliqueNumberExhaustive,
@@ -34,7 +38,9 @@ function exactValue(g: ReturnType<typeof decodeGraph6>, name: string): unknown {
 }
 
 describe('certifyInvariant() against the registry', () => {
-  const lines = readFileSync(new URL('../fixtures/atlas-1-7.g6', import.meta.url), 'utf8').trim().split('\n');
+  const lines = readFileSync(new URL('../fixtures/atlas-1-7.g6', import.meta.url), 'utf8')
+    .trim()
+    .split('\n');
   // Every graph on 1..6 vertices and every 5th on 7: the registry's algorithms are independent of these.
   const sample = lines.filter((l, i) => decodeGraph6(l).order < 7 || i % 5 === 0);
 
@@ -59,7 +65,8 @@ describe('certifyInvariant() against the registry', () => {
         }
         const c = certifyInvariant(ctx, name);
         if (c.status === 'exact') {
-          const norm = (v: unknown) => JSON.stringify(v, (_k, x) => (typeof x === 'bigint' ? x.toString() : x));
+          const norm = (v: unknown) =>
+            JSON.stringify(v, (_k, x) => (typeof x === 'bigint' ? x.toString() : x));
           expect(norm(c.value), `${name} of ${line}`).toBe(norm(registry));
           exactCount++;
         } else if (c.status === 'enclosed') {
@@ -96,11 +103,15 @@ describe('second algorithms on named graphs', () => {
   });
 
   test('spanning trees: Cayley n^(n-2), K_(p,q): p^(q-1) q^(p-1), C_n: n, disconnected: 0', () => {
-    for (let n = 1; n <= 12; n++) expect(BigInt(exactValue(F.complete(n), 'spanningTreeCount') as number)).toBe(BigInt(n) ** BigInt(Math.max(0, n - 2)));
+    for (let n = 1; n <= 12; n++)
+      expect(BigInt(exactValue(F.complete(n), 'spanningTreeCount') as number)).toBe(
+        BigInt(n) ** BigInt(Math.max(0, n - 2)),
+      );
     // K_20: 20^18 > 2^53, returned as a bigint.
     expect(exactValue(F.complete(20), 'spanningTreeCount')).toBe(20n ** 18n);
     for (let p = 1; p <= 5; p++)
-      for (let q = 1; q <= 5; q++) expect(exactValue(F.completeBipartite(p, q), 'spanningTreeCount')).toBe(p ** (q - 1) * q ** (p - 1));
+      for (let q = 1; q <= 5; q++)
+        expect(exactValue(F.completeBipartite(p, q), 'spanningTreeCount')).toBe(p ** (q - 1) * q ** (p - 1));
     for (let n = 3; n <= 12; n++) expect(exactValue(F.cycle(n), 'spanningTreeCount')).toBe(n);
     expect(exactValue(F.emptyGraph(3), 'spanningTreeCount')).toBe(0);
   });
@@ -124,7 +135,7 @@ describe('second algorithms on named graphs', () => {
     expect(edgeConnectivityExhaustive(F.cycle(9))).toBe(2);
   });
 
-  test('identities: α(G) = ω(Ḡ); Whitney κ <= λ\' <= δ (seeded random graphs)', () => {
+  test("identities: α(G) = ω(Ḡ); Whitney κ <= λ' <= δ (seeded random graphs)", () => {
     const rng = seededRng('certify-identities');
     for (let t = 0; t < 25; t++) {
       const g = randomGraph(5 + Math.floor(rng() * 9), 0.2 + 0.6 * rng(), rng);

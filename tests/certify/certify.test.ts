@@ -32,8 +32,10 @@ import { InputError } from '../../src/errors.js';
 import { certifyCounterexample, isCertifiedCounterexample } from '../../src/certify/certify.js';
 import { seededRng } from '../support/random-graph.js';
 
-const maxEdgeDegreeSum = (g: { edges: ReadonlyArray<readonly [number, number]>; degree(v: number): number }) =>
-  Math.max(...g.edges.map(([u, v]) => g.degree(u) + g.degree(v)));
+const maxEdgeDegreeSum = (g: {
+  edges: ReadonlyArray<readonly [number, number]>;
+  degree(v: number): number;
+}) => Math.max(...g.edges.map(([u, v]) => g.degree(u) + g.degree(v)));
 
 const THEOREMS = {
   hong: defineConjecture({
@@ -86,11 +88,46 @@ const THEOREMS = {
 const EQUALITY_GRAPHS: Record<keyof typeof THEOREMS, Graph[]> = {
   hong: [3, 4, 5, 6, 7, 8, 9, 10, 12].flatMap((n) => [F.complete(n), F.star(n)]),
   stanley: [2, 3, 4, 5, 6, 8].flatMap((k) => [F.complete(k), fromEdges(k + 3, completeEdges(k))]),
-  collatzSinogowitz: [F.petersen(), F.cycle(5), F.cycle(7), F.complete(6), F.hypercube(3), F.hypercube(4), F.prism(5)],
-  andersonMorley: [F.star(5), F.star(9), F.completeBipartite(2, 5), F.completeBipartite(3, 4), F.cycle(6), F.cycle(10), F.hypercube(3)],
-  laplacianAtMostOrder: [F.complete(5), F.star(7), F.wheel(7), F.completeBipartite(3, 3), F.completeMultipartite([2, 2, 3])],
-  traceIdentity: [F.petersen(), F.path(7), F.cycle(9), F.wheel(8), F.completeBipartite(3, 5), F.lollipop(4, 3)],
-  mantel: [F.completeBipartite(1, 1), F.completeBipartite(2, 2), F.completeBipartite(3, 3), F.completeBipartite(4, 4), F.completeBipartite(5, 5)],
+  collatzSinogowitz: [
+    F.petersen(),
+    F.cycle(5),
+    F.cycle(7),
+    F.complete(6),
+    F.hypercube(3),
+    F.hypercube(4),
+    F.prism(5),
+  ],
+  andersonMorley: [
+    F.star(5),
+    F.star(9),
+    F.completeBipartite(2, 5),
+    F.completeBipartite(3, 4),
+    F.cycle(6),
+    F.cycle(10),
+    F.hypercube(3),
+  ],
+  laplacianAtMostOrder: [
+    F.complete(5),
+    F.star(7),
+    F.wheel(7),
+    F.completeBipartite(3, 3),
+    F.completeMultipartite([2, 2, 3]),
+  ],
+  traceIdentity: [
+    F.petersen(),
+    F.path(7),
+    F.cycle(9),
+    F.wheel(8),
+    F.completeBipartite(3, 5),
+    F.lollipop(4, 3),
+  ],
+  mantel: [
+    F.completeBipartite(1, 1),
+    F.completeBipartite(2, 2),
+    F.completeBipartite(3, 3),
+    F.completeBipartite(4, 4),
+    F.completeBipartite(5, 5),
+  ],
 };
 
 function completeEdges(k: number): Array<[number, number]> {
@@ -148,7 +185,11 @@ describe('a hunt: seeded local search that maximises the float score', () => {
         const n = 8;
         let edges = new Set<number>();
         for (let i = 0; i < 28; i++) if (rng() < 0.5) edges.add(i);
-        const graphOf = (s: Set<number>) => fromEdges(n, pairsOf(n).filter((_, i) => s.has(i)));
+        const graphOf = (s: Set<number>) =>
+          fromEdges(
+            n,
+            pairsOf(n).filter((_, i) => s.has(i)),
+          );
         const scoreOf = (s: Set<number>) => {
           const e = evaluateConjecture(c, graphOf(s));
           return e.inDomain ? e.score : -Infinity;
@@ -198,7 +239,12 @@ describe('certifyCounterexample() on genuine counterexamples', () => {
   });
 
   test('the same claim with the constant √3 itself is an equality case, not certified', () => {
-    const c = defineConjecture({ name: 'sqrt3', statement: 'λ1 <= √3', vertices: 5, score: (g) => g.spectralRadius - Math.sqrt(3) });
+    const c = defineConjecture({
+      name: 'sqrt3',
+      statement: 'λ1 <= √3',
+      vertices: 5,
+      score: (g) => g.spectralRadius - Math.sqrt(3),
+    });
     expect(certifyCounterexample(c, F.path(5)).verdict).toBe('equality');
   });
 
@@ -216,21 +262,36 @@ describe('certifyCounterexample() on genuine counterexamples', () => {
   });
 
   test('an integer-only claim (m <= n²/4 − 1) is certified on K_(3,3) with its exact values', () => {
-    const c = defineConjecture({ name: 'mantel-minus-one', statement: 'm <= n²/4 − 1', vertices: 6, score: (g) => g.m - (g.n * g.n) / 4 + 1 });
+    const c = defineConjecture({
+      name: 'mantel-minus-one',
+      statement: 'm <= n²/4 − 1',
+      vertices: 6,
+      score: (g) => g.m - (g.n * g.n) / 4 + 1,
+    });
     const cert = certifyCounterexample(c, F.completeBipartite(3, 3));
     expect(cert.verdict).toBe('certified');
     expect(cert.lowerScore).toBe(1);
   });
 
   test('an infinite score is an ordinary certified value (diameter of a disconnected graph)', () => {
-    const c = defineConjecture({ name: 'finite-diameter', statement: 'diameter <= n', vertices: 4, score: (g) => g.diameter - g.n });
+    const c = defineConjecture({
+      name: 'finite-diameter',
+      statement: 'diameter <= n',
+      vertices: 4,
+      score: (g) => g.diameter - g.n,
+    });
     expect(certifyCounterexample(c, F.emptyGraph(3)).verdict).toBe('certified');
   });
 });
 
 describe('certifyCounterexample() reports what it cannot certify', () => {
   test('estradaIndex is named as numerical; the verdict is numerical-only', () => {
-    const c = defineConjecture({ name: 'estrada', statement: 'EE <= n', vertices: 5, score: (g) => g.estradaIndex - g.n });
+    const c = defineConjecture({
+      name: 'estrada',
+      statement: 'EE <= n',
+      vertices: 5,
+      score: (g) => g.estradaIndex - g.n,
+    });
     const cert = certifyCounterexample(c, F.complete(5));
     expect(cert.verdict).toBe('numerical-only');
     expect(cert.numerical).toEqual(['estradaIndex']);
@@ -274,7 +335,7 @@ describe('certifyCounterexample() reports what it cannot certify', () => {
     expect(cert.verdict).toBe('holds');
   });
 
-  test('a score that returns NaN is the conjecture\'s input error, as in evaluation', () => {
+  test("a score that returns NaN is the conjecture's input error, as in evaluation", () => {
     const c = defineConjecture({ name: 'nan', statement: 'x', vertices: 3, score: () => NaN });
     expect(() => certifyCounterexample(c, F.path(3))).toThrow(InputError);
   });

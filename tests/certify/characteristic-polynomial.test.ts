@@ -45,7 +45,14 @@ function pathPolynomial(n: number): IntPolynomial {
 describe('characteristicPolynomial() on generic matrices', () => {
   test('a 2x2 matrix gives x^2 - trace x + det', () => {
     // [[1, 2], [3, 4]]: x^2 - 5x - 2
-    expect(characteristicPolynomial(intMatrix([[1, 2], [3, 4]]))).toEqual(polynomial([-2, -5, 1]));
+    expect(
+      characteristicPolynomial(
+        intMatrix([
+          [1, 2],
+          [3, 4],
+        ]),
+      ),
+    ).toEqual(polynomial([-2, -5, 1]));
   });
 
   test('the empty matrix gives 1', () => {
@@ -56,8 +63,12 @@ describe('characteristicPolynomial() on generic matrices', () => {
     const rng = seededRng('charpoly-random');
     for (let trial = 0; trial < 30; trial++) {
       const n = 1 + Math.floor(rng() * 9);
-      const rows = Array.from({ length: n }, () => Array.from({ length: n }, () => Math.floor(rng() * 21) - 10));
-      expect(characteristicPolynomial(intMatrix(rows))).toEqual(characteristicPolynomialFaddeevLeVerrier(intMatrix(rows)));
+      const rows = Array.from({ length: n }, () =>
+        Array.from({ length: n }, () => Math.floor(rng() * 21) - 10),
+      );
+      expect(characteristicPolynomial(intMatrix(rows))).toEqual(
+        characteristicPolynomialFaddeevLeVerrier(intMatrix(rows)),
+      );
     }
   });
 });
@@ -69,18 +80,23 @@ describe('characteristicPolynomial() closed forms', () => {
 
   test('cycles: p(C_n) = p(P_n) - p(P_(n-2)) - 2', () => {
     for (let n = 3; n <= 14; n++) {
-      expect(charpoly(F.cycle(n)), `C_${n}`).toEqual(polySub(polySub(pathPolynomial(n), pathPolynomial(n - 2)), [2n]));
+      expect(charpoly(F.cycle(n)), `C_${n}`).toEqual(
+        polySub(polySub(pathPolynomial(n), pathPolynomial(n - 2)), [2n]),
+      );
     }
   });
 
   test('complete graphs: (x - n + 1)(x + 1)^(n-1)', () => {
-    for (let n = 1; n <= 12; n++) expect(charpoly(F.complete(n))).toEqual(polyMul(lin(n - 1), polyPow(lin(-1), n - 1)));
+    for (let n = 1; n <= 12; n++)
+      expect(charpoly(F.complete(n))).toEqual(polyMul(lin(n - 1), polyPow(lin(-1), n - 1)));
   });
 
   test('complete bipartite graphs: x^(p+q-2)(x^2 - pq)', () => {
     for (let p = 1; p <= 6; p++)
       for (let q = 1; q <= 6; q++)
-        expect(charpoly(F.completeBipartite(p, q))).toEqual(polyMul(polyPow(X, p + q - 2), polynomial([-p * q, 0, 1])));
+        expect(charpoly(F.completeBipartite(p, q))).toEqual(
+          polyMul(polyPow(X, p + q - 2), polynomial([-p * q, 0, 1])),
+        );
   });
 
   test('Petersen graph: (x - 3)(x - 1)^5 (x + 2)^4', () => {
@@ -125,8 +141,16 @@ describe('characteristicPolynomial() closed forms', () => {
 });
 
 describe('characteristicPolynomial() against Faddeev–LeVerrier on the atlas', () => {
-  const lines = readFileSync(new URL('../fixtures/atlas-1-7.g6', import.meta.url), 'utf8').trim().split('\n');
-  for (const kind of ['adjacency', 'laplacian', 'signlessLaplacian', 'distance', 'distanceLaplacian'] as const) {
+  const lines = readFileSync(new URL('../fixtures/atlas-1-7.g6', import.meta.url), 'utf8')
+    .trim()
+    .split('\n');
+  for (const kind of [
+    'adjacency',
+    'laplacian',
+    'signlessLaplacian',
+    'distance',
+    'distanceLaplacian',
+  ] as const) {
     test(`${kind}: both methods agree on every graph on 1..7 vertices (every 3rd on 7)`, () => {
       let k = 0;
       for (const line of lines) {
@@ -134,7 +158,9 @@ describe('characteristicPolynomial() against Faddeev–LeVerrier on the atlas', 
         if (g.order === 7 && k++ % 3 !== 0) continue;
         if ((kind === 'distance' || kind === 'distanceLaplacian') && !isConnected(g)) continue;
         const m = integerGraphMatrix(g, kind);
-        expect(characteristicPolynomial(m), `${kind} of ${line}`).toEqual(characteristicPolynomialFaddeevLeVerrier(m));
+        expect(characteristicPolynomial(m), `${kind} of ${line}`).toEqual(
+          characteristicPolynomialFaddeevLeVerrier(m),
+        );
       }
     });
   }

@@ -73,10 +73,16 @@ describe('double conversions', () => {
 
   test('toDoubleBelow() <= r <= toDoubleAbove() for random fractions (property)', () => {
     fc.assert(
-      fc.property(fc.bigInt({ min: -(10n ** 30n), max: 10n ** 30n }), fc.bigInt({ min: 1n, max: 10n ** 25n }), (n, d) => {
-        const r = rational(n, d);
-        return compare(fromDouble(toDoubleBelow(r)), r) <= 0 && compare(fromDouble(toDoubleAbove(r)), r) >= 0;
-      }),
+      fc.property(
+        fc.bigInt({ min: -(10n ** 30n), max: 10n ** 30n }),
+        fc.bigInt({ min: 1n, max: 10n ** 25n }),
+        (n, d) => {
+          const r = rational(n, d);
+          return (
+            compare(fromDouble(toDoubleBelow(r)), r) <= 0 && compare(fromDouble(toDoubleAbove(r)), r) >= 0
+          );
+        },
+      ),
       { numRuns: 300 },
     );
   });

@@ -11,9 +11,20 @@ import { integerGraphMatrix } from '../../src/certify/graph-matrices.js';
 import { polyMul, polyPow, polynomial } from '../../src/certify/polynomial.js';
 import { isolateRealRoots, rootsWithMultiplicity } from '../../src/certify/root-isolation.js';
 import { certifiedSpectrum } from '../../src/certify/spectral-enclosures.js';
-import { compare, powerOfTwo, rational, sub, toDoubleAbove, toDoubleBelow } from '../../src/certify/rational.js';
+import {
+  compare,
+  powerOfTwo,
+  rational,
+  sub,
+  toDoubleAbove,
+  toDoubleBelow,
+} from '../../src/certify/rational.js';
 
-function expectContains(e: { lo: ReturnType<typeof rational>; hi: ReturnType<typeof rational> }, value: number, label: string): void {
+function expectContains(
+  e: { lo: ReturnType<typeof rational>; hi: ReturnType<typeof rational> },
+  value: number,
+  label: string,
+): void {
   // value is a double within 1e-15 of the true eigenvalue; the interval is 2^-bits wide.
   expect(toDoubleBelow(e.lo), label).toBeLessThanOrEqual(value + 1e-14);
   expect(toDoubleAbove(e.hi), label).toBeGreaterThanOrEqual(value - 1e-14);
@@ -21,7 +32,10 @@ function expectContains(e: { lo: ReturnType<typeof rational>; hi: ReturnType<typ
 
 describe('isolateRealRoots()', () => {
   test('(x^2 - 2)(x - 1)^3 (x + 4)^2: roots, order and multiplicities', () => {
-    const p = polyMul(polyMul(polynomial([-2, 0, 1]), polyPow(polynomial([-1, 1]), 3)), polyPow(polynomial([4, 1]), 2));
+    const p = polyMul(
+      polyMul(polynomial([-2, 0, 1]), polyPow(polynomial([-1, 1]), 3)),
+      polyPow(polynomial([4, 1]), 2),
+    );
     const iso = isolateRealRoots(p, 50);
     expect(iso.roots.map((r) => r.multiplicity)).toEqual([1, 3, 1, 2]);
     expect(iso.roots[1]).toMatchObject({ exact: true, lo: rational(1), hi: rational(1) });
@@ -61,13 +75,16 @@ describe('certifiedSpectrum()', () => {
   test('paths: adjacency eigenvalues 2cos(πj/(n+1)) lie in their intervals', () => {
     for (let n = 1; n <= 16; n++) {
       const s = certifiedSpectrum(F.path(n), 'adjacency', 60);
-      for (let j = 1; j <= n; j++) expectContains(s.eigenvalues[j - 1], 2 * Math.cos((Math.PI * j) / (n + 1)), `P_${n} λ${j}`);
+      for (let j = 1; j <= n; j++)
+        expectContains(s.eigenvalues[j - 1], 2 * Math.cos((Math.PI * j) / (n + 1)), `P_${n} λ${j}`);
     }
   });
 
   test('cycles: eigenvalues 2cos(2πj/n), sorted', () => {
     for (let n = 3; n <= 16; n++) {
-      const expected = Array.from({ length: n }, (_, j) => 2 * Math.cos((2 * Math.PI * j) / n)).sort((a, b) => b - a);
+      const expected = Array.from({ length: n }, (_, j) => 2 * Math.cos((2 * Math.PI * j) / n)).sort(
+        (a, b) => b - a,
+      );
       const s = certifiedSpectrum(F.cycle(n), 'adjacency', 60);
       expected.forEach((v, i) => expectContains(s.eigenvalues[i], v, `C_${n} λ${i + 1}`));
     }
@@ -75,7 +92,9 @@ describe('certifiedSpectrum()', () => {
 
   test('Laplacian of paths: 2 - 2cos(πj/n)', () => {
     for (let n = 2; n <= 14; n++) {
-      const expected = Array.from({ length: n }, (_, j) => 2 - 2 * Math.cos((Math.PI * j) / n)).sort((a, b) => b - a);
+      const expected = Array.from({ length: n }, (_, j) => 2 - 2 * Math.cos((Math.PI * j) / n)).sort(
+        (a, b) => b - a,
+      );
       const s = certifiedSpectrum(F.path(n), 'laplacian', 60);
       expected.forEach((v, i) => expectContains(s.eigenvalues[i], v, `L(P_${n}) μ${i + 1}`));
     }
@@ -91,7 +110,9 @@ describe('certifiedSpectrum()', () => {
   });
 
   test('Petersen graph: 3, 1 (x5), -2 (x4), all exact', () => {
-    const all = rootsWithMultiplicity(isolateRealRoots(characteristicPolynomial(integerGraphMatrix(F.petersen(), 'adjacency'))));
+    const all = rootsWithMultiplicity(
+      isolateRealRoots(characteristicPolynomial(integerGraphMatrix(F.petersen(), 'adjacency'))),
+    );
     expect(all.map((r) => (r.exact ? Number(r.lo.num) : NaN))).toEqual([3, 1, 1, 1, 1, 1, -2, -2, -2, -2]);
   });
 
@@ -99,7 +120,11 @@ describe('certifiedSpectrum()', () => {
     // Chung, "Spectral Graph Theory" (1997), §1.2: K_n has eigenvalues 0 and n/(n-1).
     for (let n = 2; n <= 7; n++) {
       const s = certifiedSpectrum(F.complete(n), 'normalizedLaplacian', 50);
-      expect(s.eigenvalues.slice(0, n - 1).every((e) => compare(e.lo, rational(n, n - 1)) === 0 && compare(e.hi, e.lo) === 0)).toBe(true);
+      expect(
+        s.eigenvalues
+          .slice(0, n - 1)
+          .every((e) => compare(e.lo, rational(n, n - 1)) === 0 && compare(e.hi, e.lo) === 0),
+      ).toBe(true);
       expect(s.eigenvalues[n - 1]).toEqual({ lo: rational(0), hi: rational(0) });
     }
     const withIsolated = certifiedSpectrum(F.emptyGraph(3), 'normalizedLaplacian', 50);

@@ -21,7 +21,13 @@ const fixture = JSON.parse(
   readFileSync(new URL('../fixtures/charpoly-atlas.json', import.meta.url), 'utf8'),
 ) as { source: string; graphs: GraphRecord[] };
 
-const MATRICES: IntegerGraphMatrix[] = ['adjacency', 'laplacian', 'signlessLaplacian', 'distance', 'distanceLaplacian'];
+const MATRICES: IntegerGraphMatrix[] = [
+  'adjacency',
+  'laplacian',
+  'signlessLaplacian',
+  'distance',
+  'distanceLaplacian',
+];
 
 describe('characteristicPolynomial() against sympy (exact)', () => {
   test('the fixture covers the intended graphs', () => {
@@ -56,8 +62,12 @@ describe('certifiedSpectrum() contains numpy eigenvalues', () => {
           const lo = toDoubleBelow(e.lo);
           const hi = toDoubleAbove(e.hi);
           // numpy's eigvalsh is backward stable: its error is a small multiple of 1e-16 * ||M||.
-          expect(ref.eigenvalues[i], `${kind} of ${rec.graph6}, eigenvalue ${i}`).toBeGreaterThanOrEqual(lo - 1e-9);
-          expect(ref.eigenvalues[i], `${kind} of ${rec.graph6}, eigenvalue ${i}`).toBeLessThanOrEqual(hi + 1e-9);
+          expect(ref.eigenvalues[i], `${kind} of ${rec.graph6}, eigenvalue ${i}`).toBeGreaterThanOrEqual(
+            lo - 1e-9,
+          );
+          expect(ref.eigenvalues[i], `${kind} of ${rec.graph6}, eigenvalue ${i}`).toBeLessThanOrEqual(
+            hi + 1e-9,
+          );
           expect(hi - lo).toBeLessThanOrEqual(2 ** -39);
         });
       }

@@ -59,9 +59,26 @@ export function distanceFacts(g: Graph): DistanceFacts {
   const radius = n === 0 ? 0 : Math.min(...eccentricity);
   const wienerIndex = connected ? transmissions.reduce((s, t) => s + t, 0) / 2 : Infinity;
   if (!connected) {
-    return { diameter, radius, wienerIndex, transmissions, averageDistance: Infinity, proximity: Infinity, remoteness: Infinity };
+    return {
+      diameter,
+      radius,
+      wienerIndex,
+      transmissions,
+      averageDistance: Infinity,
+      proximity: Infinity,
+      remoteness: Infinity,
+    };
   }
-  if (n === 1) return { diameter, radius, wienerIndex, transmissions, averageDistance: rational(0), proximity: rational(0), remoteness: rational(0) };
+  if (n === 1)
+    return {
+      diameter,
+      radius,
+      wienerIndex,
+      transmissions,
+      averageDistance: rational(0),
+      proximity: rational(0),
+      remoteness: rational(0),
+    };
   const pairs = (n * (n - 1)) / 2;
   return {
     diameter,

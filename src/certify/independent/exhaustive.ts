@@ -33,7 +33,8 @@ export const EXHAUSTIVE_MAX_ORDER = 20;
 
 function adjacencyMasks(g: Graph): Int32Array {
   const adj = new Int32Array(g.order);
-  for (let u = 0; u < g.order; u++) for (let v = 0; v < g.order; v++) if (u !== v && hasEdge(g, u, v)) adj[u] |= 1 << v;
+  for (let u = 0; u < g.order; u++)
+    for (let v = 0; v < g.order; v++) if (u !== v && hasEdge(g, u, v)) adj[u] |= 1 << v;
   return adj;
 }
 

@@ -18,19 +18,25 @@ import { type IntPolynomial } from '../polynomial.js';
 /** Degrees by counting hasEdge(v, u) over all u. */
 export function countedDegrees(g: Graph): number[] {
   const out = new Array<number>(g.order).fill(0);
-  for (let u = 0; u < g.order; u++) for (let v = 0; v < g.order; v++) if (u !== v && hasEdge(g, u, v)) out[u]++;
+  for (let u = 0; u < g.order; u++)
+    for (let v = 0; v < g.order; v++) if (u !== v && hasEdge(g, u, v)) out[u]++;
   return out;
 }
 
 /** Edges u < v found by testing every pair. */
 export function pairEdges(g: Graph): Array<[number, number]> {
   const out: Array<[number, number]> = [];
-  for (let u = 0; u < g.order; u++) for (let v = u + 1; v < g.order; v++) if (hasEdge(g, u, v)) out.push([u, v]);
+  for (let u = 0; u < g.order; u++)
+    for (let v = u + 1; v < g.order; v++) if (hasEdge(g, u, v)) out.push([u, v]);
   return out;
 }
 
 /** Number of components of the graph on n vertices with these edges, by union–find. */
-export function unionFindComponents(n: number, edges: ReadonlyArray<readonly [number, number]>, skipEdge = -1): number {
+export function unionFindComponents(
+  n: number,
+  edges: ReadonlyArray<readonly [number, number]>,
+  skipEdge = -1,
+): number {
   const parent = Array.from({ length: n }, (_, i) => i);
   const find = (x: number): number => {
     while (parent[x] !== x) {
@@ -58,7 +64,8 @@ export function componentCountByUnionFind(g: Graph): number {
 
 /** Bipartite iff the characteristic polynomial of A has non-zero coefficients only at x^(n-2k). */
 export function isBipartiteByCharacteristicPolynomial(adjacencyCharPoly: IntPolynomial, n: number): boolean {
-  for (let i = 0; i < adjacencyCharPoly.length; i++) if ((n - i) % 2 === 1 && adjacencyCharPoly[i] !== 0n) return false;
+  for (let i = 0; i < adjacencyCharPoly.length; i++)
+    if ((n - i) % 2 === 1 && adjacencyCharPoly[i] !== 0n) return false;
   return true;
 }
 
