@@ -8,6 +8,8 @@ import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
 import { addCertifyCommand } from './certify.js';
 import { addCheckCommand } from './check.js';
+import { addGenerateCommand } from './generate.js';
+import { addSweepCommand } from './sweep.js';
 import { addDrawCommand } from './draw.js';
 import { addReportCommand } from './report.js';
 import { TOOL_VERSION } from '../version.js';
@@ -32,6 +34,8 @@ export function buildProgram(outcome: CommandOutcome): Command {
   addInvariantsCommand(program, outcome);
   addCheckCommand(program, outcome);
   addCertifyCommand(program, outcome);
+  addGenerateCommand(program, outcome);
+  addSweepCommand(program, outcome);
   addDrawCommand(program, outcome);
   addReportCommand(program, outcome);
   return program;
