@@ -23,6 +23,7 @@ import {
   cliqueNumberExhaustive,
   dominationNumberExhaustive,
   edgeConnectivityExhaustive,
+  edgeConnectivityStoerWagner,
   independenceNumberExhaustive,
   matchingNumberByTutteRank,
   matchingNumberExhaustive,
@@ -145,6 +146,20 @@ describe('second algorithms on named graphs', () => {
       expect(kappa).toBeLessThanOrEqual(lambda);
       expect(lambda).toBeLessThanOrEqual(Math.min(...g.degrees));
     }
+  });
+});
+
+describe('edgeConnectivityStoerWagner()', () => {
+  test('agrees with the exhaustive cut on seeded random graphs, and gives n - 1 on K_n, 2 on C_n', () => {
+    const rng = seededRng('stoer-wagner');
+    for (let t = 0; t < 30; t++) {
+      const g = randomGraph(2 + Math.floor(rng() * 12), 0.1 + 0.7 * rng(), rng);
+      expect(edgeConnectivityStoerWagner(g)).toBe(edgeConnectivityExhaustive(g));
+    }
+    expect(edgeConnectivityStoerWagner(F.complete(25))).toBe(24);
+    expect(edgeConnectivityStoerWagner(F.cycle(30))).toBe(2);
+    expect(edgeConnectivityStoerWagner(F.hypercube(5))).toBe(5); // Q_d is d-edge-connected (from memory)
+    expect(edgeConnectivityStoerWagner(F.emptyGraph(22))).toBe(0);
   });
 });
 
