@@ -98,7 +98,9 @@ function inputLines(c: CertifiedInput, seenPolynomials: Set<string>): string[] {
     for (const e of c.enclosures) lines.push(`        ${formatEnclosure(e)}`);
     lines.push(`      method: ${c.method}`);
   } else {
-    lines.push(`    ${c.key} ∈ ${formatEnclosure(c.enclosures[0])}  (registry ${formatFloat(c.floatValue)})`);
+    const e = c.enclosures[0];
+    const shown = isPoint(e) ? `= ${formatEnclosure(e)}  exact` : `∈ ${formatEnclosure(e)}`;
+    lines.push(`    ${c.key} ${shown}  (registry ${formatFloat(c.floatValue)})`);
     lines.push(`      method: ${c.method}`);
   }
   const ev = c.evidence;
