@@ -161,10 +161,18 @@ function spectral(
         method,
         evidence: s.evidence,
       };
+    const picked = pick(s.eigenvalues, ctx.graph.order) as Enclosure | undefined;
+    if (picked === undefined) {
+      return {
+        name,
+        status: 'unconfirmed',
+        reason: `${name} is not defined on a graph of order ${ctx.graph.order}`,
+      };
+    }
     return {
       name,
       status: 'enclosed',
-      enclosures: [pick(s.eigenvalues, ctx.graph.order)],
+      enclosures: [picked],
       isList: false,
       method,
       evidence: s.evidence,

@@ -43,6 +43,9 @@
  * has. A genuine counterexample is certified when its margin exceeds about ρ·|∇score|·s + τ
  * (≈ 1e-11 for a score like λ1 - c).
  *
+ * Near a stationary point of the score (where (ii) fails) the exact score varies over B only to
+ * second order, about H (ρs)^2 / 2 for curvature H, which τ still absorbs while H s^2 < 2^29.
+ *
  * What the model does not cover: a score that computes its own real quantities from g.graph,
  * g.edges or g.degree (only τ covers their rounding), or that scales a difference of exact
  * values by a huge constant. Such scores should read registry invariants instead.

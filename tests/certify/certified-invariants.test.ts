@@ -88,6 +88,18 @@ describe('certifyInvariant() against the registry', () => {
   });
 });
 
+describe("certifyInvariant() outside an invariant's domain", () => {
+  test('secondLargestEigenvalue of K_1 and distance spectra of disconnected graphs are unconfirmed, not wrong', () => {
+    expect(certifyInvariant(new ExactContext(F.complete(1), 50), 'secondLargestEigenvalue').status).toBe(
+      'unconfirmed',
+    );
+    expect(certifyInvariant(new ExactContext(F.emptyGraph(3), 50), 'distanceSpectralRadius').status).toBe(
+      'unconfirmed',
+    );
+    expect(certifyInvariant(new ExactContext(F.path(3), 50), 'noSuchInvariant').status).toBe('unconfirmed');
+  });
+});
+
 describe('second algorithms on named graphs', () => {
   test('Petersen graph values', () => {
     const p = F.petersen();
