@@ -6,6 +6,7 @@
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
+import { addCheckCommand } from './check.js';
 import { addDrawCommand } from './draw.js';
 import { addReportCommand } from './report.js';
 import { TOOL_VERSION } from '../version.js';
@@ -28,6 +29,7 @@ export function buildProgram(outcome: CommandOutcome): Command {
     .exitOverride()
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   addInvariantsCommand(program, outcome);
+  addCheckCommand(program, outcome);
   addDrawCommand(program, outcome);
   addReportCommand(program, outcome);
   return program;
