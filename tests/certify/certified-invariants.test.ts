@@ -88,6 +88,45 @@ describe('certifyInvariant() against the registry', () => {
   });
 });
 
+describe('certifyInvariant() against the registry on larger random graphs', () => {
+  const HARD = [
+    'matchingNumber',
+    'independenceNumber',
+    'cliqueNumber',
+    'chromaticNumber',
+    'dominationNumber',
+    'vertexCoverNumber',
+    'vertexConnectivity',
+    'edgeConnectivity',
+    'spanningTreeCount',
+    'bridgeCount',
+    'cutVertexCount',
+    'girth',
+    'triangleCount',
+  ];
+  test('hard integer invariants agree on seeded G(n, p), n = 12..18 and n = 24 (Tutte rank, Stoer–Wagner)', () => {
+    const rng = seededRng('certify-vs-registry-large');
+    const graphs = [
+      ...Array.from({ length: 8 }, () => randomGraph(12 + Math.floor(rng() * 7), 0.15 + 0.6 * rng(), rng)),
+      randomGraph(24, 0.2, rng),
+    ];
+    for (const g of graphs) {
+      const memo = new InvariantMemo(g);
+      const ctx = new ExactContext(g, 50);
+      for (const name of HARD) {
+        const c = certifyInvariant(ctx, name);
+        if (c.status === 'unconfirmed') {
+          expect(g.order, `${name} unconfirmed at n = ${g.order}`).toBeGreaterThan(20);
+          continue;
+        }
+        expect(c.status).toBe('exact');
+        if (c.status === 'exact')
+          expect(String(c.value), `${name}, n = ${g.order}`).toBe(String(memo.get(name)));
+      }
+    }
+  });
+});
+
 describe("certifyInvariant() outside an invariant's domain", () => {
   test('secondLargestEigenvalue of K_1 and distance spectra of disconnected graphs are unconfirmed, not wrong', () => {
     expect(certifyInvariant(new ExactContext(F.complete(1), 50), 'secondLargestEigenvalue').status).toBe(
