@@ -232,6 +232,9 @@ function spanningTreeCountByCharPoly(ctx: ExactContext): number | bigint {
 }
 
 const HARD = `plain exhaustive search over vertex subsets (orders <= ${EXHAUSTIVE_MAX_ORDER})`;
+const HARD_OR_BRANCHING = `${HARD}, else plain two-way branching on a vertex of largest degree (within a node budget)`;
+const tooHard = (name: string): string =>
+  `${name} could not be confirmed by a second algorithm on this graph (above ${EXHAUSTIVE_MAX_ORDER} vertices the plain branching exceeded its node budget)`;
 const tooLarge = (name: string): string =>
   `${name} has no independent second algorithm above ${EXHAUSTIVE_MAX_ORDER} vertices`;
 
@@ -318,7 +321,11 @@ const CERTIFIERS: Record<string, Certifier> = {
     tooLarge('chromaticNumber'),
   ),
   dominationNumber: exact(HARD, (c) => dominationNumberExhaustive(c.graph), tooLarge('dominationNumber')),
-  vertexCoverNumber: exact(HARD, (c) => vertexCoverNumberExhaustive(c.graph), tooLarge('vertexCoverNumber')),
+  vertexCoverNumber: exact(
+    HARD_OR_BRANCHING,
+    (c) => vertexCoverNumberExhaustive(c.graph),
+    tooHard('vertexCoverNumber'),
+  ),
   vertexConnectivity: exact(
     HARD,
     (c) => vertexConnectivityExhaustive(c.graph),

@@ -24,6 +24,7 @@ import {
   dominationNumberExhaustive,
   edgeConnectivityExhaustive,
   edgeConnectivityStoerWagner,
+  independenceNumberByBranching,
   independenceNumberExhaustive,
   matchingNumberByTutteRank,
   matchingNumberExhaustive,
@@ -197,6 +198,27 @@ describe('second algorithms on named graphs', () => {
       expect(kappa).toBeLessThanOrEqual(lambda);
       expect(lambda).toBeLessThanOrEqual(Math.min(...g.degrees));
     }
+  });
+});
+
+describe('independenceNumberByBranching()', () => {
+  test('agrees with the exhaustive subset pass on seeded random graphs (α and ω)', () => {
+    const rng = seededRng('branching-vs-subsets');
+    for (let t = 0; t < 30; t++) {
+      const g = randomGraph(3 + Math.floor(rng() * 15), 0.1 + 0.8 * rng(), rng);
+      expect(independenceNumberByBranching(g, false)).toBe(independenceNumberExhaustive(g));
+      expect(independenceNumberByBranching(g, true)).toBe(cliqueNumberExhaustive(g));
+    }
+  });
+
+  test('closed forms above the exhaustive limit: α(C_n) = ⌊n/2⌋, α(K_(p,q)) = max(p, q), ω(K_n) = n', () => {
+    for (const n of [21, 33, 48]) {
+      expect(independenceNumberByBranching(F.cycle(n), false)).toBe(Math.floor(n / 2));
+      expect(independenceNumberByBranching(F.complete(n), true)).toBe(n);
+      expect(independenceNumberByBranching(F.path(n), false)).toBe(Math.ceil(n / 2));
+    }
+    expect(independenceNumberByBranching(F.completeBipartite(9, 15), false)).toBe(15);
+    expect(independenceNumberByBranching(F.completeBipartite(9, 15), true)).toBe(2);
   });
 });
 
