@@ -214,6 +214,7 @@ function inputJson(c: CertifiedInput): Record<string, unknown> {
 export function certificateToJson(cert: Certificate): Record<string, unknown> {
   return {
     conjecture: cert.conjecture,
+    statement: cert.statement,
     graph6: cert.graph6,
     order: cert.order,
     size: cert.size,
