@@ -227,3 +227,22 @@ function mul2(x: Rational, k: number): Rational {
   const f = powerOfTwo(k);
   return rational(x.num * f.num, x.den * f.den);
 }
+
+/**
+ * The k-th largest real root of p counted with multiplicity (k = 1 the largest), isolated to
+ * width <= 2^-bits; for a characteristic polynomial, the k-th largest eigenvalue.
+ * Throws RangeError when p has fewer than k real roots.
+ */
+export function kthLargestRoot(
+  p: IntPolynomial,
+  k: number,
+  bits: number = DEFAULT_ISOLATION_BITS,
+): IsolatedRoot {
+  const all = rootsWithMultiplicity(isolateRealRoots(p, bits));
+  if (!Number.isInteger(k) || k < 1 || k > all.length) {
+    throw new RangeError(
+      `Expected k in 1..${all.length} (the real roots counted with multiplicity) but found ${k}`,
+    );
+  }
+  return all[k - 1];
+}

@@ -9,7 +9,7 @@ import * as F from '../../src/graph/families.js';
 import { characteristicPolynomial } from '../../src/certify/characteristic-polynomial.js';
 import { integerGraphMatrix } from '../../src/certify/graph-matrices.js';
 import { polyMul, polyPow, polynomial } from '../../src/certify/polynomial.js';
-import { isolateRealRoots, rootsWithMultiplicity } from '../../src/certify/root-isolation.js';
+import { isolateRealRoots, kthLargestRoot, rootsWithMultiplicity } from '../../src/certify/root-isolation.js';
 import { certifiedSpectrum } from '../../src/certify/spectral-enclosures.js';
 import {
   compare,
@@ -52,6 +52,16 @@ describe('isolateRealRoots()', () => {
     expect(iso.roots[0]).toMatchObject({ exact: true, lo: rational(5) });
     expectContains(iso.roots[1], 0.002, '2/1000');
     expectContains(iso.roots[2], 0.001, '1/1000');
+  });
+
+  test('kthLargestRoot() counts multiplicity: Petersen λ1 = 3, λ2..λ6 = 1, λ7..λ10 = -2', () => {
+    const p = characteristicPolynomial(integerGraphMatrix(F.petersen(), 'adjacency'));
+    const at = (k: number) => kthLargestRoot(p, k).lo;
+    expect([1, 2, 6, 7, 10].map((k) => Number(at(k).num))).toEqual([3, 1, 1, -2, -2]);
+    expect(() => kthLargestRoot(p, 11)).toThrow(RangeError);
+    // λ2(P_6) = 2cos(2π/7) = 1.2469796037174670...
+    const r = kthLargestRoot(characteristicPolynomial(integerGraphMatrix(F.path(6), 'adjacency')), 2, 60);
+    expectContains(r, 2 * Math.cos((2 * Math.PI) / 7), 'λ2(P_6)');
   });
 
   test('x^2 + 1 has no real roots; a constant has none', () => {
