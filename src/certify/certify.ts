@@ -302,6 +302,17 @@ export function certifyCounterexample(c: Conjecture, g: Graph, options: CertifyO
     });
     if (reads.size === before) break;
   }
+  // Invariants still first read in the last round were evaluated with registry values only.
+  for (const key of reads) {
+    if (known.has(key)) continue;
+    inputs.push({
+      name: key,
+      status: 'unconfirmed',
+      reason: 'read only at some certified points, after every round of certification',
+      key,
+      floatValue: floatOf(base, key),
+    });
+  }
   return decide(c, g, plain, inputs, outcome!);
 }
 
