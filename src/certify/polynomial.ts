@@ -12,7 +12,7 @@
  * By Gauss's lemma a primitive divisor b of an integer polynomial a leaves an integer quotient,
  * so every division here is exact over the integers.
  */
-import { type Rational } from './rational.js';
+import { type Rational, rational } from './rational.js';
 
 /** Coefficients in increasing degree, no trailing zeros. */
 export type IntPolynomial = readonly bigint[];
@@ -107,16 +107,9 @@ export function signAt(p: IntPolynomial, x: Rational): number {
   return v < 0n ? -1 : v > 0n ? 1 : 0;
 }
 
-/** p at a rational point, exactly, as numerator over den^deg. */
+/** p at a rational point, exactly. */
 export function evaluateAt(p: IntPolynomial, x: Rational): Rational {
-  const d = x.den ** BigInt(Math.max(0, p.length - 1));
-  const n = homogenisedValue(p, x);
-  // Reduce; done here to keep rational.ts free of polynomial knowledge.
-  let a = n < 0n ? -n : n;
-  let b = d;
-  while (b !== 0n) [a, b] = [b, a % b];
-  const g = a === 0n ? 1n : a;
-  return { num: n / g, den: d / g };
+  return rational(homogenisedValue(p, x), x.den ** BigInt(Math.max(0, p.length - 1)));
 }
 
 function gcdBig(a: bigint, b: bigint): bigint {
