@@ -4,7 +4,7 @@ scores/, computed with networkx 2.8.8 and numpy 1.24 (Debian packages), independ
 
 For every graph of tests/fixtures/atlas-1-7.g6 (in file order) it records, for connected graphs,
 the score of each example in scoreNames order (null for disconnected graphs, which the examples
-exclude, and for lambda2 on one vertex):
+exclude, and for lambda2 on one vertex), and its maximum degree (for tests/cli/check.test.ts):
   spectral-radius-near-average-degree: lambda1 - 2m/n - 1
   second-eigenvalue-vs-matching:       lambda2 - nu          (nu: networkx max_weight_matching)
   hong-spectral-radius-bound:          lambda1 - sqrt(2m - n + 1)
@@ -113,9 +113,11 @@ def g6(g):
 with open(os.path.join(fixtures, "atlas-1-7.g6")) as f:
     atlas = [line.strip() for line in f if line.strip()]
 atlas_scores = []
+atlas_max_degrees = []
 for line in atlas:
     g = nx.from_graph6_bytes(line.encode("ascii"))
     atlas_scores.append(scores(g) if nx.is_connected(g) else None)
+    atlas_max_degrees.append(max(d for _, d in g.degree()))
 
 family_max = {}
 for g in families(20):
@@ -152,6 +154,7 @@ out = {
     "source": "tests/scripts/make_score_references.py with networkx %s, numpy %s" % (nx.__version__, np.__version__),
     "scoreNames": NAMES,
     "atlasScores": atlas_scores,
+    "atlasMaxDegrees": atlas_max_degrees,
     "familyMaxima": family_max,
     "twoStarTrees": trees,
     "completeMinusStar": complete_minus_star,
