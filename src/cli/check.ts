@@ -178,8 +178,10 @@ Verdicts: "refutes (numerical)" (score > ${ROUNDING_MARGIN}; not yet certified e
 "outside the domain" (not connected when the conjecture asks for it, or 'where' is false).
 Exit status: 0 when some graph refutes a conjecture, 1 when none does, 2 on bad input.
 
-Example:
-  refute check scores/spectral-star-bound.ts --families --max-vertices 10`,
+Examples:
+  refute check scores/spectral-radius-near-average-degree.ts --families
+  refute check scores/second-eigenvalue-vs-complement-degree.ts 'IJ~~~~~~w'
+  refute generate --vertices 7 | refute check my-claim.ts --stdin --json`,
     )
     .action(async (file: string, graphs: string[], opts: CheckOptions) => {
       const maxVertices = parseMaxVertices(opts);
