@@ -7,6 +7,8 @@ import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
 import { addCheckCommand } from './check.js';
+import { addGenerateCommand } from './generate.js';
+import { addSweepCommand } from './sweep.js';
 import { addDrawCommand } from './draw.js';
 import { addReportCommand } from './report.js';
 import { TOOL_VERSION } from '../version.js';
@@ -30,6 +32,8 @@ export function buildProgram(outcome: CommandOutcome): Command {
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   addInvariantsCommand(program, outcome);
   addCheckCommand(program, outcome);
+  addGenerateCommand(program, outcome);
+  addSweepCommand(program, outcome);
   addDrawCommand(program, outcome);
   addReportCommand(program, outcome);
   return program;
