@@ -14,7 +14,7 @@ of each example over networkx's own builds of the standard families on 2..20 ver
 cycles, stars, complete, complete bipartite, Turan, wheels, hypercubes, Petersen, friendship,
 lollipops, barbells, brooms, prisms, ladders), and lambda2 and nu of the two-star trees T(a, b)
 of scores/second-eigenvalue-vs-matching.ts, and lambda2 of K_n minus the edges of a star K_{1,k}
-(scores/second-eigenvalue-vs-complement-degree.ts).
+or of a 4-cycle (scores/second-eigenvalue-vs-complement-degree.ts).
 
 Run: /usr/bin/python3 tests/scripts/make_score_references.py
 """
@@ -150,6 +150,12 @@ for n, k in [(9, 3), (10, 3), (10, 4), (12, 4)]:
         {"order": n, "starLeaves": k, "graph6": g6(g), "secondLargestEigenvalue": float(spectrum(g)[1])}
     )
 
+complete_minus_4_cycle = []
+for n in [8, 9, 12]:
+    g = nx.complete_graph(n)
+    g.remove_edges_from([(0, 1), (1, 2), (2, 3), (3, 0)])
+    complete_minus_4_cycle.append({"order": n, "graph6": g6(g), "secondLargestEigenvalue": float(spectrum(g)[1])})
+
 out = {
     "source": "tests/scripts/make_score_references.py with networkx %s, numpy %s" % (nx.__version__, np.__version__),
     "scoreNames": NAMES,
@@ -158,6 +164,7 @@ out = {
     "familyMaxima": family_max,
     "twoStarTrees": trees,
     "completeMinusStar": complete_minus_star,
+    "completeMinus4Cycle": complete_minus_4_cycle,
 }
 with open(os.path.join(fixtures, "score-references.json"), "w") as f:
     json.dump(out, f, separators=(",", ":"))
@@ -165,5 +172,5 @@ with open(os.path.join(fixtures, "score-references.json"), "w") as f:
 for i, name in enumerate(NAMES):
     vals = [s[i] for s in atlas_scores if s is not None and s[i] is not None]
     print(name, "atlas max %.6g" % max(vals), "families max %.6g" % family_max[name]["score"], family_max[name]["graph6"])
-for t in trees + complete_minus_star:
+for t in trees + complete_minus_star + complete_minus_4_cycle:
     print(t)
