@@ -16,10 +16,18 @@ function refute(args: string[], stdin?: string): Promise<CliResult> {
   return runCli(args, { cwd: root, stdin });
 }
 
-// Every graph on 6 vertices: the atlas lines whose first byte is N(6) = 6 + 63 = 'E'.
-const sixVertexGraphs = readFileSync(path.join(root, 'tests/fixtures/atlas-1-7.g6'), 'utf8')
-  .split('\n')
-  .filter((line) => line.startsWith('E'));
+// Every graph on 6 vertices: the atlas lines whose first byte is N(6) = 6 + 63 = 'E'; networkx's
+// connectedness and maximum degree of each (tests/scripts/make_score_references.py).
+const atlas = readFileSync(path.join(root, 'tests/fixtures/atlas-1-7.g6'), 'utf8').trim().split('\n');
+const reference = JSON.parse(
+  readFileSync(path.join(root, 'tests/fixtures/score-references.json'), 'utf8'),
+) as {
+  atlasScores: Array<unknown[] | null>;
+  atlasMaxDegrees: number[];
+};
+const sixVertexGraphs = atlas.filter((line) => line.startsWith('E'));
+const disconnectedSix = atlas.filter((line, i) => line.startsWith('E') && reference.atlasScores[i] === null);
+const dominatedSix = atlas.filter((line, i) => line.startsWith('E') && reference.atlasMaxDegrees[i] === 5);
 
 const TWO_CLAIMS = scratch.write(
   'two-claims.ts',
@@ -59,6 +67,9 @@ describe('refute check', () => {
       records.filter((x) => x.conjecture === name && x.verdict === 'refutes');
     expect(refuting('always-connected').length).toBe(44);
     expect(refuting('no-dominating-vertex').length).toBe(34);
+    // And exactly the graphs networkx finds disconnected / with a vertex of degree 5.
+    expect(refuting('always-connected').map((x) => x.graph6)).toEqual(disconnectedSix);
+    expect(refuting('no-dominating-vertex').map((x) => x.graph6)).toEqual(dominatedSix);
     expect(new Set(refuting('always-connected').map((x) => x.certification))).toEqual(new Set(['numerical']));
     expect(records[0].source).toBe('stdin line 1');
   });
