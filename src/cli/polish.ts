@@ -3,7 +3,8 @@
  * [--fixed-order] [--order-slack K] [--max-seconds S] [--json]`: polishes each given graph by
  * variable neighbourhood search over structured local edits (src/search/polish/) and prints,
  * per input, the best graph reached at its order and at each other order it visited, with the
- * score and the verdict of src/conjecture/verdict.ts (the one place that decides what refutes). Exit 0 when some result refutes, 1 when none,
+ * score and the verdict: a positive score goes to the exact certifier (src/certify), and only a
+ * certified graph refutes. Exit 0 when some result is a certified counterexample, 1 when none,
  * 2 on bad input. All inputs are read and checked before the first is polished, so a malformed
  * line costs nothing and prints nothing.
  */
@@ -22,7 +23,8 @@ import {
   type PolishSettings,
   type ScoredGraph,
 } from '../search/polish/vns.js';
-import { checkExitStatus, describeVerdict, judge, type Verdict } from '../conjecture/verdict.js';
+import { judge } from '../conjecture/verdict.js';
+import { certifyCounterexample } from '../certify/certify.js';
 import { type Conjecture } from '../conjecture/types.js';
 import { type GraphInput, readGraphInputs } from './graph-input.js';
 import { type CommandOutcome } from './main.js';
@@ -71,41 +73,67 @@ function describeStart(input: GraphInput, o: PolishOutcome): string {
   return `from ${input.graph6} (${input.where}): n=${input.graph.order}, m=${input.graph.size}, ${scoreText}`;
 }
 
-/** The project's one verdict function (src/conjecture/verdict.ts) on a polished graph. */
-function verdictOf(c: Conjecture, s: ScoredGraph): Verdict {
-  return judge(c, s.graph, { inDomain: true, score: s.score });
+/** What a polished graph says about the conjecture. */
+interface PolishVerdict {
+  /** The certifier's verdict when the float score is positive, else the float verdict. */
+  readonly kind: 'certified' | 'numerical-only' | 'equality' | 'disagreement' | 'holds' | 'tight';
+  readonly certified: boolean;
 }
 
-function textBlock(c: Conjecture, input: GraphInput, o: PolishOutcome): string {
+/**
+ * The one decision of `polish`: a graph with a positive float score goes to the certifier
+ * (src/certify, the function hunt, check and sweep use), and refutes only when certified; the
+ * others are judged by their float score (verdict.ts: "tight" within rounding of 0, "holds" below).
+ */
+function verdictOf(c: Conjecture, s: ScoredGraph): PolishVerdict {
+  if (s.score > 0) {
+    const cert = certifyCounterexample(c, s.graph);
+    const kind = cert.verdict === 'outside-domain' ? 'disagreement' : cert.verdict;
+    return { kind, certified: cert.certified };
+  }
+  const v = judge(c, s.graph, { inDomain: true, score: s.score });
+  return { kind: v.kind === 'tight' ? 'tight' : 'holds', certified: false };
+}
+
+const VERDICT_TEXT: Readonly<Record<PolishVerdict['kind'], string>> = {
+  certified: 'refutes (certified)',
+  'numerical-only': 'numerical only (score > 0 within rounding, not certified)',
+  equality: 'holds (equality within rounding, not certified)',
+  disagreement: 'not certified (two computations disagree; see refute certify)',
+  holds: 'holds',
+  tight: 'holds (tight)',
+};
+
+function textBlock(input: GraphInput, o: PolishOutcome, verdicts: readonly PolishVerdict[]): string {
   const lines = [describeStart(input, o)];
   if (o.best === undefined) lines.push(`  best at n=${input.graph.order}: no graph in the domain found`);
-  for (const s of resultsOf(o)) {
+  resultsOf(o).forEach((s, i) => {
     const g: Graph = s.graph;
     lines.push(
       `  best at n=${g.order}: ${encodeGraph6(g)}  m=${g.size}  score ${formatNumber(s.score)}  ` +
-        describeVerdict(verdictOf(c, s)),
+        VERDICT_TEXT[verdicts[i].kind],
     );
-  }
+  });
   lines.push(`  ${o.evaluations} graphs scored`);
   return lines.join('\n') + '\n';
 }
 
-function jsonLine(c: Conjecture, input: GraphInput, o: PolishOutcome): string {
+function jsonLine(input: GraphInput, o: PolishOutcome, verdicts: readonly PolishVerdict[]): string {
   const ev = o.startEvaluation;
   return (
     JSON.stringify({
       input: input.graph6,
       where: input.where,
       start: { order: input.graph.order, score: ev.inDomain ? scoreToJson(ev.score) : null },
-      results: resultsOf(o).map((s) => {
-        const v = verdictOf(c, s);
+      results: resultsOf(o).map((s, i) => {
+        const v = verdicts[i];
         return {
           graph6: encodeGraph6(s.graph),
           order: s.graph.order,
           size: s.graph.size,
           score: scoreToJson(s.score),
           verdict: v.kind,
-          certification: v.certification,
+          certified: v.certified,
         };
       }),
       evaluations: o.evaluations,
@@ -150,7 +178,7 @@ export function addPolishCommand(program: Command, outcome: CommandOutcome): voi
         throw new InputError('no start graphs given: standard input held no graph6 line');
 
       const evaluate = (g: Graph) => evaluateConjecture(conjecture, g);
-      let refutations = 0;
+      let refuted = false;
       for (let i = 0; i < inputs.length; i++) {
         const settings: PolishSettings = {
           ...POLISH_DEFAULTS,
@@ -161,9 +189,10 @@ export function addPolishCommand(program: Command, outcome: CommandOutcome): voi
           ...(seconds === undefined ? {} : { deadline: Date.now() + seconds * 1000 }),
         };
         const o = polishGraph(evaluate, inputs[i].graph, polishStream(opts.seed, i), settings);
-        refutations += resultsOf(o).filter((s) => verdictOf(conjecture, s).kind === 'refutes').length;
-        await writeOut(opts.json ? jsonLine(conjecture, inputs[i], o) : textBlock(conjecture, inputs[i], o));
+        const verdicts = resultsOf(o).map((s) => verdictOf(conjecture, s));
+        if (verdicts.some((v) => v.certified)) refuted = true;
+        await writeOut(opts.json ? jsonLine(inputs[i], o, verdicts) : textBlock(inputs[i], o, verdicts));
       }
-      outcome.status = checkExitStatus(refutations);
+      outcome.status = refuted ? 0 : 1;
     });
 }

@@ -55,13 +55,13 @@ export default defineConjecture({
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 describe('refute polish (end to end)', () => {
-  test('from the spider it reaches a counterexample at the same order and exits 0', async () => {
+  test('from the spider it reaches a certified counterexample at the same order and exits 0', async () => {
     const r = await runCli(['polish', falseClaim, SPIDER, '--steps', '200', '--fixed-order']);
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     const lines = r.stdout.trim().split('\n');
     expect(lines[0]).toMatch(/^from IsaCA\?_C\? \(argument 1\): n=10, m=9, score -0\.\d+$/);
-    const m = /^ {2}best at n=10: (\S+) {2}m=9 {2}score (\S+) {2}refutes \(numerical\)$/.exec(lines[1]);
+    const m = /^ {2}best at n=10: (\S+) {2}m=9 {2}score (\S+) {2}refutes \(certified\)$/.exec(lines[1]);
     expect(m).not.toBeNull();
     const g = decodeGraph6(m![1]);
     expect(Number(m![2])).toBeGreaterThan(0);
@@ -94,9 +94,9 @@ describe('refute polish (end to end)', () => {
       expect(rec.results[0].order).toBe(rec.start.order);
       for (const res of rec.results) {
         expect(Math.abs(res.order - rec.start.order)).toBeLessThanOrEqual(1);
-        // verdict.ts: a score above the rounding margin 1e-9 refutes, numerically.
-        expect(res.verdict).toBe(res.score > 1e-9 ? 'refutes' : res.score >= -1e-9 ? 'tight' : 'holds');
-        expect(res.certification).toBe(res.verdict === 'refutes' ? 'numerical' : null);
+        // Positive scores go to the certifier; these margins (> 0.01) are far above rounding.
+        if (res.score > 0.01) expect([res.verdict, res.certified]).toEqual(['certified', true]);
+        if (res.score < -1e-9) expect([res.verdict, res.certified]).toEqual(['holds', false]);
         expect(decodeGraph6(res.graph6).order).toBe(res.order);
       }
       expect(rec.evaluations).toBeLessThanOrEqual(150);
@@ -136,5 +136,16 @@ describe('refute polish (end to end)', () => {
     const missing = await runCli(['polish', join(dir, 'nope.ts'), SPIDER]);
     expect(missing.status).toBe(2);
     expect(missing.stderr).toMatch(/no such file/);
+  });
+});
+
+describe('refute polish on an equality case', () => {
+  // Hong's bound (scores/hong-spectral-radius-bound.ts) is a theorem with equality on stars: the
+  // star K_{1,9} scores 0 up to rounding, which must never count as a counterexample.
+  test('the star under Hong bound is not certified and the exit status is 1', async () => {
+    const r = await runCli(['polish', 'scores/hong-spectral-radius-bound.ts', 'IsaCCA?_?', '--steps', '200']);
+    expect(r.status).toBe(1);
+    expect(r.stdout).not.toMatch(/refutes/);
+    expect(r.stdout).toMatch(/numerical only/);
   });
 });
