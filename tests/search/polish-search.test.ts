@@ -25,6 +25,7 @@ import { moveLeaf } from '../../src/search/polish/moves/move-leaf.js';
 import { polishGraphs, polishStream } from '../../src/search/polish/polish-graphs.js';
 import { polishGraph, POLISH_DEFAULTS, type PolishOutcome } from '../../src/search/polish/vns.js';
 import { judge } from '../../src/conjecture/verdict.js';
+import { isCertifiedCounterexample } from '../../src/certify/certify.js';
 import { randomGraph, seededRng } from '../support/random-graph.js';
 
 const SPECTRAL_GAP = defineConjecture({
@@ -94,6 +95,8 @@ describe('polishGraph()', () => {
     expect(o.best).toBeDefined();
     const score = expectGenuine(SPECTRAL_GAP, o.best!.graph, o.best!.score);
     expect(judge(SPECTRAL_GAP, o.best!.graph, { inDomain: true, score }).kind).toBe('refutes');
+    // And exactly: the certifier (src/certify) confirms it.
+    expect(isCertifiedCounterexample(SPECTRAL_GAP, o.best!.graph)).toBe(true);
     expect(computeInvariant(o.best!.graph, 'triangleCount')).toBe(0);
     expect(computeInvariant(o.best!.graph, 'isConnected')).toBe(true);
     expect(o.best!.graph.order).toBe(10);
