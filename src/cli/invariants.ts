@@ -26,7 +26,9 @@ function selectedNames(only: string | undefined): string[] {
   for (const name of names) {
     if (!INVARIANTS.has(name)) {
       const hint = nearestName(name, invariantNames());
-      throw new InputError(`--only: unknown invariant '${name}'${hint ? `; did you mean '${hint}'?` : ''} (see 'refute invariants --help')`);
+      throw new InputError(
+        `--only: unknown invariant '${name}'${hint ? `; did you mean '${hint}'?` : ''} (see 'refute invariants --help')`,
+      );
     }
   }
   return names;
@@ -53,7 +55,9 @@ export function addInvariantsCommand(program: Command, outcome: CommandOutcome):
     .action(async (graphs: string[], opts: InvariantsOptions) => {
       const names = selectedNames(opts.only);
       if (graphs.length === 0 && !opts.stdin) {
-        throw new InputError("no graphs given: pass graph6 strings as arguments or use --stdin (example: refute invariants 'IheA@GUAo')");
+        throw new InputError(
+          "no graphs given: pass graph6 strings as arguments or use --stdin (example: refute invariants 'IheA@GUAo')",
+        );
       }
       const width = Math.max(...names.map((n) => n.length));
       let first = true;
@@ -71,7 +75,8 @@ export function addInvariantsCommand(program: Command, outcome: CommandOutcome):
           text += `graph ${input.graph6}\n`;
           for (const name of names) {
             const v = valueOrReason(memo, name);
-            const shown = v instanceof InvariantDomainError ? '(undefined: connected graphs only)' : formatInvariant(v);
+            const shown =
+              v instanceof InvariantDomainError ? '(undefined: connected graphs only)' : formatInvariant(v);
             text += `  ${name.padEnd(width)}  ${shown}\n`;
           }
           await writeOut(text);

@@ -20,7 +20,9 @@ function checkOrder(order: number): void {
 export function graphFromRows(order: number, rows: Uint32Array): Graph {
   const wordsPerRow = wordsForOrder(order);
   if (rows.length !== order * wordsPerRow) {
-    throw new RangeError(`Expected ${order * wordsPerRow} row words for order ${order} but found ${rows.length}`);
+    throw new RangeError(
+      `Expected ${order * wordsPerRow} row words for order ${order} but found ${rows.length}`,
+    );
   }
   const degrees = new Int32Array(order);
   let twiceSize = 0;
@@ -56,15 +58,20 @@ export function fromAdjacencyMatrix(matrix: ReadonlyArray<ReadonlyArray<number |
   const edges: Array<[number, number]> = [];
   for (let i = 0; i < order; i++) {
     if (matrix[i].length !== order) {
-      throw new RangeError(`Expected row ${i} of the adjacency matrix to have ${order} entries but found ${matrix[i].length}`);
+      throw new RangeError(
+        `Expected row ${i} of the adjacency matrix to have ${order} entries but found ${matrix[i].length}`,
+      );
     }
     for (let j = 0; j < order; j++) {
       const a = Number(matrix[i][j]);
       const b = Number(matrix[j][i]);
       if ((a !== 0 && a !== 1) || a !== b) {
-        throw new RangeError(`Expected a symmetric 0/1 matrix but found entries ${a} at (${i},${j}) and ${b} at (${j},${i})`);
+        throw new RangeError(
+          `Expected a symmetric 0/1 matrix but found entries ${a} at (${i},${j}) and ${b} at (${j},${i})`,
+        );
       }
-      if (i === j && a === 1) throw new RangeError(`Expected a zero diagonal but found a loop at vertex ${i}`);
+      if (i === j && a === 1)
+        throw new RangeError(`Expected a zero diagonal but found a loop at vertex ${i}`);
       if (j > i && a === 1) edges.push([i, j]);
     }
   }
@@ -79,7 +86,8 @@ export function fromAdjacencyMatrix(matrix: ReadonlyArray<ReadonlyArray<number |
 export function fromUpperTriangleBits(order: number, bits: ArrayLike<number>): Graph {
   checkOrder(order);
   const pairs = (order * (order - 1)) / 2;
-  if (bits.length !== pairs) throw new RangeError(`Expected ${pairs} pair bits for order ${order} but found ${bits.length}`);
+  if (bits.length !== pairs)
+    throw new RangeError(`Expected ${pairs} pair bits for order ${order} but found ${bits.length}`);
   const wordsPerRow = wordsForOrder(order);
   const rows = new Uint32Array(order * wordsPerRow);
   let k = 0;

@@ -71,7 +71,8 @@ export function completeMultipartite(parts: ReadonlyArray<number>): Graph {
   const edges: Edge[] = [];
   for (let a = 0; a < parts.length; a++)
     for (let b = a + 1; b < parts.length; b++)
-      for (let i = 0; i < parts[a]; i++) for (let j = 0; j < parts[b]; j++) edges.push([start[a] + i, start[b] + j]);
+      for (let i = 0; i < parts[a]; i++)
+        for (let j = 0; j < parts[b]; j++) edges.push([start[a] + i, start[b] + j]);
   return fromEdges(n, edges);
 }
 
@@ -107,7 +108,8 @@ export function hypercube(d: number): Graph {
   if (d > 16) throw new RangeError(`Expected d <= 16 but found ${d}`);
   const n = 1 << d;
   const edges: Edge[] = [];
-  for (let v = 0; v < n; v++) for (let b = 0; b < d; b++) if (v < (v ^ (1 << b))) edges.push([v, v ^ (1 << b)]);
+  for (let v = 0; v < n; v++)
+    for (let b = 0; b < d; b++) if (v < (v ^ (1 << b))) edges.push([v, v ^ (1 << b)]);
   return fromEdges(n, edges);
 }
 

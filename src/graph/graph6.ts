@@ -58,7 +58,10 @@ function sixBits(s: string, i: number, where: string): number {
   const c = s.charCodeAt(i);
   if (c < 63 || c > 126) {
     const shown = c >= 33 && c <= 126 ? `'${s[i]}'` : `code ${c}`;
-    throw new Graph6ParseError(where, `byte ${i + 1} is ${shown}, outside the graph6 range 63..126 ('?'..'~')`);
+    throw new Graph6ParseError(
+      where,
+      `byte ${i + 1} is ${shown}, outside the graph6 range 63..126 ('?'..'~')`,
+    );
   }
   return c - 63;
 }
@@ -71,15 +74,19 @@ export function decodeOrder(s: string, where = 'input'): { order: number; offset
   const first = sixBits(s, 0, where);
   if (first < 63) return { order: first, offset: 1 };
   if (s.length >= 2 && s.charCodeAt(1) === 126) {
-    if (s.length < 8) throw new Graph6ParseError(where, 'the order starts with ~~ but the 6 bytes that follow are missing');
+    if (s.length < 8)
+      throw new Graph6ParseError(where, 'the order starts with ~~ but the 6 bytes that follow are missing');
     let n = 0;
     for (let i = 2; i < 8; i++) n = n * 64 + sixBits(s, i, where);
-    if (n <= 258047) throw new Graph6ParseError(where, `order ${n} is written in the 8-byte form, which is for n > 258047`);
+    if (n <= 258047)
+      throw new Graph6ParseError(where, `order ${n} is written in the 8-byte form, which is for n > 258047`);
     return { order: n, offset: 8 };
   }
-  if (s.length < 4) throw new Graph6ParseError(where, 'the order starts with ~ but the 3 bytes that follow are missing');
+  if (s.length < 4)
+    throw new Graph6ParseError(where, 'the order starts with ~ but the 3 bytes that follow are missing');
   const n = (sixBits(s, 1, where) << 12) | (sixBits(s, 2, where) << 6) | sixBits(s, 3, where);
-  if (n <= 62) throw new Graph6ParseError(where, `order ${n} is written in the 4-byte form, which is for n > 62`);
+  if (n <= 62)
+    throw new Graph6ParseError(where, `order ${n} is written in the 4-byte form, which is for n > 62`);
   return { order: n, offset: 4 };
 }
 
@@ -97,7 +104,7 @@ export function encodeGraph6(g: Graph): string {
   for (let j = 1; j < n; j++) {
     const base = j * wordsPerRow;
     for (let i = 0; i < j; i++, k++) {
-      if ((rows[base + (i >>> 5)] >>> (i & 31)) & 1) bytes[(k / 6) | 0] |= 32 >>> k % 6;
+      if ((rows[base + (i >>> 5)] >>> (i & 31)) & 1) bytes[(k / 6) | 0] |= 32 >>> (k % 6);
     }
   }
   let out = encodeOrder(n);
@@ -125,8 +132,11 @@ export function decodeGraph6(text: string, where = 'input'): Graph {
     const kind = s[0] === '&' ? 'digraph6' : 'sparse6';
     throw new Graph6ParseError(where, `this is ${kind}, not graph6; convert it to graph6 first`);
   }
+  // Check every byte first: a stray character is a clearer diagnosis than the length it causes.
+  for (let i = 0; i < s.length; i++) sixBits(s, i, where);
   const { order: n, offset } = decodeOrder(s, where);
-  if (n > DECODE_MAX_ORDER) throw new Graph6ParseError(where, `order ${n} exceeds the largest supported order ${DECODE_MAX_ORDER}`);
+  if (n > DECODE_MAX_ORDER)
+    throw new Graph6ParseError(where, `order ${n} exceeds the largest supported order ${DECODE_MAX_ORDER}`);
   const expected = graph6DataLength(n);
   const found = s.length - offset;
   if (found !== expected) {
@@ -138,7 +148,10 @@ export function decodeGraph6(text: string, where = 'input'): Graph {
   if (pairs % 6 !== 0) {
     const unused = 6 - (pairs % 6);
     if ((data[expected - 1] & ((1 << unused) - 1)) !== 0) {
-      throw new Graph6ParseError(where, `the last ${unused} padding bits must be zero but '${s[s.length - 1]}' sets some`);
+      throw new Graph6ParseError(
+        where,
+        `the last ${unused} padding bits must be zero but '${s[s.length - 1]}' sets some`,
+      );
     }
   }
   const wordsPerRow = wordsForOrder(n);

@@ -96,7 +96,12 @@ export const COMPONENT_INVARIANTS: InvariantDefinition[] = [
     description: 'one component (n = 1 is connected)',
     compute: (_g, memo) => memo.get('componentCount') === 1,
   },
-  { name: 'isBipartite', kind: 'boolean', description: 'no odd cycle', compute: (g) => bipartition(g) !== null },
+  {
+    name: 'isBipartite',
+    kind: 'boolean',
+    description: 'no odd cycle',
+    compute: (g) => bipartition(g) !== null,
+  },
   {
     name: 'isTree',
     kind: 'boolean',

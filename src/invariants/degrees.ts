@@ -35,5 +35,10 @@ export const DEGREE_INVARIANTS: InvariantDefinition[] = [
     description: '2m/n',
     compute: (g) => (g.order === 0 ? 0 : (2 * g.size) / g.order),
   },
-  { name: 'degreeSequence', kind: 'integer-list', description: 'degrees, non-increasing', compute: degreeSequence },
+  {
+    name: 'degreeSequence',
+    kind: 'integer-list',
+    description: 'degrees, non-increasing',
+    compute: degreeSequence,
+  },
 ];

@@ -7,8 +7,12 @@ import { type InvariantValue } from './registry.js';
 type JsonScalar = number | string | boolean;
 
 function scalarToJson(x: number | bigint | boolean): JsonScalar {
-  if (typeof x === 'bigint') return x <= BigInt(Number.MAX_SAFE_INTEGER) && x >= -BigInt(Number.MAX_SAFE_INTEGER) ? Number(x) : x.toString();
-  if (typeof x === 'number' && !Number.isFinite(x)) return Number.isNaN(x) ? 'NaN' : x > 0 ? 'Infinity' : '-Infinity';
+  if (typeof x === 'bigint')
+    return x <= BigInt(Number.MAX_SAFE_INTEGER) && x >= -BigInt(Number.MAX_SAFE_INTEGER)
+      ? Number(x)
+      : x.toString();
+  if (typeof x === 'number' && !Number.isFinite(x))
+    return Number.isNaN(x) ? 'NaN' : x > 0 ? 'Infinity' : '-Infinity';
   return x;
 }
 
@@ -26,10 +30,14 @@ export function formatNumber(x: number): string {
   return s.replace(/\.?0+$/, '');
 }
 
+/** Magnitude below which a list entry is printed as 0 (display only). */
+const DISPLAY_ZERO = 1e-12;
+
 /** The human form of an invariant value. */
 export function formatInvariant(value: InvariantValue): string {
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   if (typeof value === 'bigint') return value.toString();
   if (typeof value === 'number') return formatNumber(value);
-  return (value as number[]).map(formatNumber).join(' ');
+  // In a printed spectrum, a solver residue such as 4.8e-16 stands for 0; JSON keeps the raw value.
+  return (value as number[]).map((x) => formatNumber(Math.abs(x) < DISPLAY_ZERO ? 0 : x)).join(' ');
 }

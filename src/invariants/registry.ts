@@ -10,6 +10,10 @@
 import { type Graph } from '../graph/graph.js';
 import { DEGREE_INVARIANTS } from './degrees.js';
 import { COMPONENT_INVARIANTS } from './components.js';
+import { DISTANCE_INVARIANTS } from './distances.js';
+import { SPECTRAL_INVARIANTS } from './spectra.js';
+import { TRIANGLE_INVARIANTS } from './triangles.js';
+import { DEGREE_INDEX_INVARIANTS } from './degree-indices.js';
 
 /** What sort of value an invariant has; decides JSON encoding, printing and certification. */
 export type InvariantKind = 'integer' | 'real' | 'boolean' | 'integer-list' | 'real-list';
@@ -63,14 +67,16 @@ export class InvariantMemo {
 const DEFINITIONS: ReadonlyArray<InvariantDefinition> = [
   ...DEGREE_INVARIANTS,
   ...COMPONENT_INVARIANTS,
-  // DISTANCE
-  // SPECTRAL
-  // TRIANGLE
-  // DEGREEIDX
+  ...DISTANCE_INVARIANTS,
+  ...SPECTRAL_INVARIANTS,
+  ...TRIANGLE_INVARIANTS,
+  ...DEGREE_INDEX_INVARIANTS,
 ];
 
 /** Name -> definition. */
-export const INVARIANTS: ReadonlyMap<string, InvariantDefinition> = new Map(DEFINITIONS.map((d) => [d.name, d]));
+export const INVARIANTS: ReadonlyMap<string, InvariantDefinition> = new Map(
+  DEFINITIONS.map((d) => [d.name, d]),
+);
 
 /** All invariant names, in registry order. */
 export function invariantNames(): string[] {
