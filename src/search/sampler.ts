@@ -102,7 +102,7 @@ export class FastSampler {
     let pre: tfTypes.Tensor2D = tf.zeros([count, width]);
     for (let i = 0; i < n; i++) {
       const p = tf.tidy(() => {
-        let h: tfTypes.Tensor2D = tf.relu(tf.add(pre, tf.slice(this.positionRows, [i, 0], [1, width])));
+        let h = tf.relu(tf.add(pre, tf.slice(this.positionRows, [i, 0], [1, width]))) as tfTypes.Tensor2D;
         const last = this.kernels.length - 1;
         for (let k = 0; k <= last; k++) {
           h = tf.fused.matMul({
@@ -110,7 +110,7 @@ export class FastSampler {
             b: this.kernels[k],
             bias: this.biases[k],
             activation: k === last ? 'sigmoid' : 'relu',
-          });
+          }) as tfTypes.Tensor2D;
         }
         return h;
       });
@@ -129,8 +129,9 @@ export class FastSampler {
         if (bit) any = true;
       }
       if (any && i + 1 < n) {
-        const next = tf.tidy(() =>
-          tf.add(pre, tf.mul(tf.tensor2d(column, [count, 1]), tf.slice(this.edgeRows, [i, 0], [1, width]))),
+        const next = tf.tidy(
+          () =>
+            tf.add(pre, tf.mul(tf.tensor2d(column, [count, 1]), tf.slice(this.edgeRows, [i, 0], [1, width]))) as tfTypes.Tensor2D,
         );
         pre.dispose();
         pre = next;

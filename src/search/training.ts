@@ -169,7 +169,7 @@ export function trainEpoch(
     const stepSize = (adam.learningRate * Math.sqrt(1 - Math.pow(adam.beta2, step))) / (1 - Math.pow(adam.beta1, step));
     const loss = tf.tidy(() => {
       const bt = tf.tensor2d(batchBits.subarray(0, count * n), [count, n]);
-      const ys = tf.reshape(bt, [count * n, 1]);
+      const ys = tf.reshape(bt, [count * n, 1]) as tfTypes.Tensor2D;
       const { value, grads } = tf.variableGrads(() => meanCrossEntropy(tf, prefixLogits(tf, vars, bt), ys), vars);
       for (let p = 0; p < vars.length; p++) {
         const g = grads[vars[p].name];

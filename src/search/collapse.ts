@@ -1,0 +1,98 @@
+/**
+ * Watching for collapse and answering it.
+ *
+ * The plain cross-entropy method stalls: the policy becomes deterministic, every graph of the
+ * batch is the same near miss, and the elite it trains on is that graph again. We watch two
+ * signals each iteration: the fraction of distinct graphs among the batch's fresh samples and the
+ * policy's mean decision entropy. When either is below its floor and the best score has not
+ * improved for `patience` iterations, the policy is perturbed (Gaussian noise on the kernels,
+ * Adam's moments reset); after `restartAfter` perturbations without improvement it is restarted
+ * from fresh weights. The carried-over pool is kept either way, so what was found is not lost
+ * and the restarted policy is trained on it at once. (The same escalation from small to large
+ * moves is the idea of variable neighbourhood search: N. Mladenović, P. Hansen, "Variable
+ * neighborhood search", Computers & Operations Research 24 (1997) 1097-1100.)
+ */
+
+export interface CollapseSettings {
+  /** Collapse when fewer than this fraction of fresh samples are distinct. */
+  readonly minDistinctFraction: number;
+  /** ... or when the mean decision entropy (bits) falls below this. */
+  readonly minEntropy: number;
+  /** Iterations without improvement of the best score, while collapsed, before acting. */
+  readonly patience: number;
+  /** Noise scale of a perturbation, relative to each layer's Glorot limit. */
+  readonly perturbScale: number;
+  /** Perturbations without improvement before a restart. */
+  readonly restartAfter: number;
+}
+
+export const COLLAPSE_DEFAULTS: CollapseSettings = {
+  minDistinctFraction: 0.2,
+  minEntropy: 0.05,
+  patience: 10,
+  perturbScale: 0.5,
+  restartAfter: 3,
+};
+
+export interface CollapseState {
+  /** Iterations since the best score last improved. */
+  readonly staleIterations: number;
+  /** Perturbations since the best score last improved. */
+  readonly perturbationsSinceImprovement: number;
+  /** Totals over the run, for the log and the progress line. */
+  readonly perturbations: number;
+  readonly restarts: number;
+}
+
+export const FRESH_COLLAPSE_STATE: CollapseState = {
+  staleIterations: 0,
+  perturbationsSinceImprovement: 0,
+  perturbations: 0,
+  restarts: 0,
+};
+
+export type CollapseAction = 'none' | 'perturb' | 'restart';
+
+export interface CollapseSignals {
+  readonly distinctFraction: number;
+  readonly meanEntropy: number;
+  readonly improved: boolean;
+}
+
+/** Whether the signals say the policy has collapsed. */
+export function isCollapsed(signals: CollapseSignals, settings: CollapseSettings): boolean {
+  return signals.distinctFraction < settings.minDistinctFraction || signals.meanEntropy < settings.minEntropy;
+}
+
+/** The next state and what to do to the policy now. */
+export function collapseStep(
+  state: CollapseState,
+  signals: CollapseSignals,
+  settings: CollapseSettings,
+): { state: CollapseState; action: CollapseAction; collapsed: boolean } {
+  const collapsed = isCollapsed(signals, settings);
+  if (signals.improved) {
+    return { state: { ...state, staleIterations: 0, perturbationsSinceImprovement: 0 }, action: 'none', collapsed };
+  }
+  const stale = state.staleIterations + 1;
+  if (!collapsed || stale < settings.patience) {
+    return { state: { ...state, staleIterations: stale }, action: 'none', collapsed };
+  }
+  if (state.perturbationsSinceImprovement + 1 >= settings.restartAfter) {
+    return {
+      state: { staleIterations: 0, perturbationsSinceImprovement: 0, perturbations: state.perturbations, restarts: state.restarts + 1 },
+      action: 'restart',
+      collapsed,
+    };
+  }
+  return {
+    state: {
+      staleIterations: 0,
+      perturbationsSinceImprovement: state.perturbationsSinceImprovement + 1,
+      perturbations: state.perturbations + 1,
+      restarts: state.restarts,
+    },
+    action: 'perturb',
+    collapsed,
+  };
+}
