@@ -8,11 +8,7 @@
  * that connect c components). The repaired graph's decisions, not the sampled ones, then enter
  * selection and training, so the policy learns to produce connected graphs itself.
  */
-
-/** Index of pair {u, v} in graph6 order (u < v): v(v-1)/2 + u. */
-export function pairIndex(u: number, v: number): number {
-  return u < v ? (v * (v - 1)) / 2 + u : (u * (u - 1)) / 2 + v;
-}
+import { pairIndex } from './pair-bits.js';
 
 /**
  * Adds the chaining edges to the decisions `bits` (N entries, graph6 order) in place and

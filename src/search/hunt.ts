@@ -74,6 +74,14 @@ export function explorationClamp(order: number): number {
   return 0.5 / Math.max(1, pairCount(order));
 }
 
+/** A counterexample as the run records it. */
+export interface CounterexampleRecord {
+  /** graphKey of the graph (canonical graph6 once canonical labelling is in). */
+  readonly key: string;
+  readonly score: number;
+  readonly certification: 'numerical' | 'certified';
+}
+
 export interface HuntState {
   /** The next iteration to run (0 for a fresh run). */
   readonly iteration: number;
@@ -83,8 +91,8 @@ export interface HuntState {
   readonly pool: readonly Candidate[];
   /** Best in-domain graphs ever seen, distinct, best first. */
   readonly best: readonly Candidate[];
-  /** Keys of the counterexamples found so far, in order of discovery. */
-  readonly counterexamples: readonly string[];
+  /** The counterexamples found so far, in order of discovery. */
+  readonly counterexamples: readonly CounterexampleRecord[];
   readonly collapse: CollapseState;
 }
 
@@ -118,8 +126,8 @@ export interface IterationReport {
   readonly trainingLoss: number;
   readonly collapsed: boolean;
   readonly action: CollapseAction;
-  /** Counterexamples first seen in this iteration, as [key, score] pairs. */
-  readonly newCounterexamples: ReadonlyArray<{ key: string; graph: Graph; score: number; certification: string }>;
+  /** Counterexamples first seen in this iteration, in batch order. */
+  readonly newCounterexamples: readonly CounterexampleRecord[];
   /** Wall-clock milliseconds per phase (not part of the deterministic state). */
   readonly timings: { generate: number; score: number; select: number; train: number };
 }
@@ -170,17 +178,16 @@ export async function runIteration(
   const best = mergeBest(state.best, ranked, o.bestCapacity);
   const bestScore = best.length > 0 ? best[0].score : -Infinity;
   const improved = bestScore > previousBest;
-  const known = new Set(state.counterexamples);
-  const newCounterexamples: Array<{ key: string; graph: Graph; score: number; certification: string }> = [];
+  const known = new Set(state.counterexamples.map((c) => c.key));
+  const newCounterexamples: CounterexampleRecord[] = [];
   for (let b = 0; b < o.batch; b++) {
     const c = fresh[b];
     if (!c.inDomain || known.has(c.key)) continue;
     const verdict = judge(freshGraphs[b], evaluations[b]);
     if (verdict === null) continue;
     known.add(c.key);
-    newCounterexamples.push({ key: c.key, graph: freshGraphs[b], score: c.score, certification: verdict });
+    newCounterexamples.push({ key: c.key, score: c.score, certification: verdict });
   }
-  newCounterexamples.sort((a, b) => (a.score !== b.score ? (a.score > b.score ? -1 : 1) : 0));
   const distinctFraction = distinctCount(fresh) / o.batch;
   let eliteSum = 0;
   let eliteInDomain = 0;
@@ -223,7 +230,7 @@ export async function runIteration(
     optimizer,
     pool,
     best,
-    counterexamples: [...state.counterexamples, ...newCounterexamples.map((c) => c.key)],
+    counterexamples: [...state.counterexamples, ...newCounterexamples],
     collapse,
   };
   return {

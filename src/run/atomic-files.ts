@@ -1,0 +1,49 @@
+/**
+ * Durable file writes for the run directory: a file is replaced by writing a temporary file
+ * beside it, fsyncing it, renaming it over the old one and fsyncing the folder (the usual
+ * POSIX recipe: rename is atomic within a file system), so a reader or a crash sees either the
+ * old content or the new, never a mix. Appends are fsynced before returning.
+ */
+import { closeSync, fsyncSync, openSync, renameSync, writeSync } from 'node:fs';
+import { dirname } from 'node:path';
+
+/** fsync a folder so that a rename inside it is durable. */
+export function fsyncFolder(path: string): void {
+  const fd = openSync(path, 'r');
+  try {
+    fsyncSync(fd);
+  } finally {
+    closeSync(fd);
+  }
+}
+
+/** Writes data to path, creating or truncating it, and fsyncs it. */
+export function writeDurably(path: string, data: string | Uint8Array): void {
+  const fd = openSync(path, 'w');
+  try {
+    if (typeof data === 'string') writeSync(fd, data);
+    else writeSync(fd, data);
+    fsyncSync(fd);
+  } finally {
+    closeSync(fd);
+  }
+}
+
+/** Replaces path's content atomically. */
+export function replaceAtomically(path: string, data: string | Uint8Array): void {
+  const temporary = `${path}.tmp`;
+  writeDurably(temporary, data);
+  renameSync(temporary, path);
+  fsyncFolder(dirname(path));
+}
+
+/** Appends text to path (creating it) and fsyncs it. */
+export function appendDurably(path: string, text: string): void {
+  const fd = openSync(path, 'a');
+  try {
+    writeSync(fd, text);
+    fsyncSync(fd);
+  } finally {
+    closeSync(fd);
+  }
+}
