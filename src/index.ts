@@ -24,3 +24,11 @@ export {
   type InvariantDefinition,
 } from './invariants/registry.js';
 export { InputError, InvariantDomainError } from './errors.js';
+export { defineConjecture } from './conjecture/define.js';
+export type {
+  Conjecture,
+  ConjectureSpec,
+  GraphView,
+  GraphInvariants,
+  Evaluation,
+} from './conjecture/types.js';

@@ -18,6 +18,7 @@ import { InvariantDomainError } from '../errors.js';
 import { componentLabels } from './components.js';
 import { type InvariantDefinition, type InvariantMemo } from './registry.js';
 import { symmetricEigenvalues } from './symmetric-eigenvalues.js';
+import { spectralRadius } from './spectral-radius.js';
 
 /** Which symmetric matrix of the graph. */
 export type GraphMatrixKind = 'adjacency' | 'laplacian' | 'signlessLaplacian' | 'normalizedLaplacian';
@@ -100,7 +101,7 @@ export const SPECTRAL_INVARIANTS: InvariantDefinition[] = [
     name: 'spectralRadius',
     kind: 'real',
     description: 'λ1, largest eigenvalue of A',
-    compute: (_g, memo) => spectrum(memo, 'adjacencySpectrum')[0],
+    compute: spectralRadius,
   },
   {
     name: 'secondLargestEigenvalue',
