@@ -6,6 +6,9 @@
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
+import { addHuntCommand } from './hunt.js';
+import { addResumeCommand } from './resume.js';
+import { addDumpCommand } from './dump.js';
 import { TOOL_VERSION } from '../version.js';
 
 /** What a command's action returns: the process's exit status. */
@@ -26,6 +29,9 @@ export function buildProgram(outcome: CommandOutcome): Command {
     .exitOverride()
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   addInvariantsCommand(program, outcome);
+  addHuntCommand(program, outcome);
+  addResumeCommand(program, outcome);
+  addDumpCommand(program, outcome);
   return program;
 }
 

@@ -30,6 +30,8 @@ export interface BatchSource {
   sample(weights: PolicyWeights, iteration: number, count: number, clamp: number): Promise<SampledBatch>;
   /** Evaluations of `count` graphs given by their decisions (count x N bits). */
   evaluate(order: number, bits: Uint8Array, count: number): Promise<Evaluation[]>;
+  /** Releases threads or tensors. */
+  close?(): Promise<void>;
 }
 
 export interface HuntOptions {

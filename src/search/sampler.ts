@@ -43,6 +43,11 @@ export interface SampledBatch {
   readonly bits: Uint8Array;
   /** Mean binary entropy (bits) of the clamped decision probabilities: 1 = uniform, 0 = deterministic. */
   readonly meanEntropy: number;
+  /**
+   * Per graph, the sum of its decisions' entropies. meanEntropy is their sum, in episode order,
+   * over count x N, so batches split across threads combine to the same value.
+   */
+  readonly entropySums: Float64Array;
   /** count x N probabilities when requested. */
   readonly probabilities?: Float32Array;
 }
@@ -51,6 +56,13 @@ export interface SampledBatch {
 export function binaryEntropy(p: number): number {
   if (p <= 0 || p >= 1) return 0;
   return -(p * Math.log2(p) + (1 - p) * Math.log2(1 - p));
+}
+
+/** Sum of per-graph entropy sums, in order, divided by the number of decisions. */
+export function meanOfSums(entropySums: Float64Array, pairs: number): number {
+  let total = 0;
+  for (const x of entropySums) total += x;
+  return entropySums.length * pairs > 0 ? total / (entropySums.length * pairs) : 0;
 }
 
 /** The policy's weights uploaded once as tensors, ready to sample many batches. */
@@ -98,7 +110,7 @@ export class FastSampler {
     const column = new Float32Array(count);
     const lo = req.clamp;
     const hi = 1 - req.clamp;
-    let entropy = 0;
+    const entropySums = new Float64Array(count);
     let pre: tfTypes.Tensor2D = tf.zeros([count, width]);
     for (let i = 0; i < n; i++) {
       const p = tf.tidy(() => {
@@ -122,7 +134,7 @@ export class FastSampler {
         if (probabilities) probabilities[b * n + i] = q;
         if (q < lo) q = lo;
         else if (q > hi) q = hi;
-        entropy += binaryEntropy(q);
+        entropySums[b] += binaryEntropy(q);
         const bit = rngs[b]() < q ? 1 : 0;
         bits[b * n + i] = bit;
         column[b] = bit;
@@ -138,7 +150,7 @@ export class FastSampler {
       }
     }
     pre.dispose();
-    return { order: this.order, count, bits, meanEntropy: count * n > 0 ? entropy / (count * n) : 0, probabilities };
+    return { order: this.order, count, bits, meanEntropy: meanOfSums(entropySums, n), entropySums, probabilities };
   }
 
   /** Frees the tensors. */
