@@ -9,6 +9,7 @@ import { addInvariantsCommand } from './invariants.js';
 import { addHuntCommand } from './hunt.js';
 import { addResumeCommand } from './resume.js';
 import { addDumpCommand } from './dump.js';
+import { addDrawCommand } from './draw.js';
 import { TOOL_VERSION } from '../version.js';
 
 /** What a command's action returns: the process's exit status. */
@@ -32,6 +33,7 @@ export function buildProgram(outcome: CommandOutcome): Command {
   addHuntCommand(program, outcome);
   addResumeCommand(program, outcome);
   addDumpCommand(program, outcome);
+  addDrawCommand(program, outcome);
   return program;
 }
 
@@ -52,7 +54,11 @@ export async function main(argv: string[]): Promise<number> {
       return 2;
     }
     if (isBrokenPipe(err)) return outcome.status;
-    throw err;
+    // Not the user's fault, but never exit 1 ("nothing found") on a crash.
+    const message = err instanceof Error ? err.message : String(err);
+    process.stderr.write(`refute: internal error: ${message} (set REFUTE_DEBUG=1 for the stack trace)\n`);
+    if (process.env.REFUTE_DEBUG) process.stderr.write(`${(err as Error).stack ?? ''}\n`);
+    return 2;
   }
 }
 

@@ -1,0 +1,39 @@
+import { describe, expect, test } from 'vitest';
+import { mkdtempSync, readFileSync, existsSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { XMLValidator } from 'fast-xml-parser';
+import { runCli } from '../support/run-cli.js';
+
+describe('refute draw (end to end)', () => {
+  const dir = mkdtempSync(join(tmpdir(), 'refute-draw-'));
+  test('draw writes a well-formed SVG with the Petersen graph', async () => {
+    const out = join(dir, 'p.svg');
+    const r = await runCli(['draw', 'IheA@GUAo', '--out', out, '--colour', 'degree']);
+    expect(r.status).toBe(0);
+    const svg = readFileSync(out, 'utf8');
+    expect(XMLValidator.validate(svg)).toBe(true);
+    expect(svg.match(/<circle/g)?.length).toBe(10);
+  });
+  test('draw writes a PNG when --out ends in .png', async () => {
+    const out = join(dir, 'p.png');
+    const r = await runCli(['draw', 'DQc', '--out', out]);
+    expect(r.status).toBe(0);
+    // PNG signature (ISO/IEC 15948, §5.2): 89 50 4E 47 0D 0A 1A 0A.
+    expect([...readFileSync(out).subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+  });
+  test('a bad layout name exits 2 and leaves an earlier file untouched', async () => {
+    const out = join(dir, 'keep.svg');
+    writeFileSync(out, 'earlier');
+    const r = await runCli(['draw', 'DQc', '--out', out, '--layout', 'spiral']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toBe("refute: --layout: expected one of auto, force, tree, circle but found 'spiral'\n");
+    expect(readFileSync(out, 'utf8')).toBe('earlier');
+  });
+  test('an unwritable folder exits 2 with a one-line message', async () => {
+    const r = await runCli(['draw', 'DQc', '--out', join(dir, 'missing', 'x.svg')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/^refute: cannot write .*x\.svg \(ENOENT\): check that the folder exists/);
+    expect(existsSync(join(dir, 'missing'))).toBe(false);
+  });
+});
