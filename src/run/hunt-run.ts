@@ -194,6 +194,9 @@ export async function driveRun(ctx: DriveContext, initial: HuntState): Promise<D
   let ran = 0;
   let stoppedBy: DriveResult['stoppedBy'] = 'signal';
   for (;;) {
+    // Let pending signal callbacks run: an iteration is synchronous work, and without a turn of
+    // the event loop a SIGINT would wait for the whole run.
+    await new Promise((resolve) => setImmediate(resolve));
     if (ctx.flag.requested) {
       stoppedBy = 'signal';
       break;

@@ -118,7 +118,10 @@ describe('refute hunt / resume / dump (end to end)', () => {
     const logText = (): string => (existsSync(join(dir, 'log.jsonl')) ? readFileSync(join(dir, 'log.jsonl'), 'utf8') : '');
     while ((logText().match(/"event":"iteration"/g) ?? []).length < 2) await new Promise((r) => setTimeout(r, 20));
     child.kill('SIGTERM');
+    // Never leave a hunt running if the signal is ignored: the test then fails on the status.
+    const guard = setTimeout(() => child.kill('SIGKILL'), 20_000);
     const status = await new Promise((r) => child.on('close', r));
+    clearTimeout(guard);
     expect(status).toBe(0);
     const lines = logText().trim().split('\n').map((l) => JSON.parse(l));
     const last = lines[lines.length - 1];
