@@ -23,11 +23,18 @@ interface Reply {
   evaluations?: Evaluation[];
 }
 
-/** The worker script beside this module: compiled .js in dist, .ts under tsx (tests, benches). */
-function workerScript(): { url: URL; execArgv: string[] } {
+/**
+ * A worker running batch-worker beside this module: the compiled .js in dist; under tsx (tests,
+ * benches) the .ts source, through a small bootstrap that registers tsx's loader inside the
+ * worker first (loader hooks given to the parent process do not reach worker threads).
+ */
+function startWorker(data: WorkerInit): Worker {
   const self = import.meta.url;
-  if (self.endsWith('.ts')) return { url: new URL('./batch-worker.ts', self), execArgv: [...process.execArgv, '--import', 'tsx'] };
-  return { url: new URL('./batch-worker.js', self), execArgv: process.execArgv };
+  if (!self.endsWith('.ts')) return new Worker(new URL('./batch-worker.js', self), { workerData: data });
+  const tsxApi = import.meta.resolve('tsx/esm/api');
+  const script = new URL('./batch-worker.ts', self).href;
+  const bootstrap = `import(${JSON.stringify(tsxApi)}).then((m) => { m.register(); return import(${JSON.stringify(script)}); });`;
+  return new Worker(bootstrap, { eval: true, workerData: data });
 }
 
 class WorkerHandle {
@@ -76,9 +83,8 @@ export function splitRange(count: number, parts: number): Array<{ start: number;
 }
 
 export async function workerBatchSource(threads: number, seed: string, conjecturePath: string, conjectureName: string): Promise<BatchSource> {
-  const { url, execArgv } = workerScript();
   const data: WorkerInit = { seed, conjecturePath, conjectureName };
-  const handles = Array.from({ length: threads }, () => new WorkerHandle(new Worker(url, { workerData: data, execArgv })));
+  const handles = Array.from({ length: threads }, () => new WorkerHandle(startWorker(data)));
   await Promise.all(handles.map((h) => h.ready));
   return {
     async sample(weights: PolicyWeights, iteration: number, count: number, clamp: number): Promise<SampledBatch> {
