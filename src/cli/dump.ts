@@ -65,8 +65,11 @@ export function addDumpCommand(program: Command, outcome: CommandOutcome): void 
       let lines = readLines(source);
       if (top !== undefined) lines = lines.slice(0, top);
       if (format === 'json') {
-        const byGraph = new Map(readSummaryEntries(summaryPath(dir), which).map((e) => [String(e.graph6), e]));
-        for (const line of lines) await writeOut(JSON.stringify(byGraph.get(line) ?? { graph6: line }) + '\n');
+        const byGraph = new Map(
+          readSummaryEntries(summaryPath(dir), which).map((e) => [String(e.graph6), e]),
+        );
+        for (const line of lines)
+          await writeOut(JSON.stringify(byGraph.get(line) ?? { graph6: line }) + '\n');
       } else {
         let first = true;
         for (const [k, line] of lines.entries()) {
@@ -76,7 +79,9 @@ export function addDumpCommand(program: Command, outcome: CommandOutcome): void 
             await writeOut(line + '\n');
           } else {
             const g = decodeGraph6(line, where);
-            await writeOut((first ? '' : '\n') + (format === 'adjacency' ? formatAdjacencyList(g) : formatEdgeList(g)));
+            await writeOut(
+              (first ? '' : '\n') + (format === 'adjacency' ? formatAdjacencyList(g) : formatEdgeList(g)),
+            );
           }
           first = false;
         }

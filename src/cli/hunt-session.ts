@@ -9,7 +9,13 @@ import { type TfModule } from '../search/backend.js';
 import { type HuntState, type IterationReport } from '../search/hunt.js';
 import { localBatchSource } from '../search/local-source.js';
 import { workerBatchSource } from '../search/worker-source.js';
-import { type DriveResult, type HuntTarget, type StopConditions, type StopFlag, driveRun } from '../run/hunt-run.js';
+import {
+  type DriveResult,
+  type HuntTarget,
+  type StopConditions,
+  type StopFlag,
+  driveRun,
+} from '../run/hunt-run.js';
 import { type RunManifest } from '../run/manifest.js';
 import { formatNumber } from '../invariants/encode.js';
 import { writeOut } from './output.js';
@@ -20,16 +26,26 @@ function clock(ms: number): string {
   const h = Math.floor(s / 3600);
   const m = Math.floor((s % 3600) / 60);
   const sec = s % 60;
-  return h > 0 ? `${h}:${String(m).padStart(2, '0')}:${String(sec).padStart(2, '0')}` : `${m}:${String(sec).padStart(2, '0')}`;
+  return h > 0
+    ? `${h}:${String(m).padStart(2, '0')}:${String(sec).padStart(2, '0')}`
+    : `${m}:${String(sec).padStart(2, '0')}`;
 }
 
 /** The one-line progress report. */
-export function progressLine(r: IterationReport, state: HuntState, elapsedMs: number, batch: number, stop: StopConditions, ran: number): string {
+export function progressLine(
+  r: IterationReport,
+  state: HuntState,
+  elapsedMs: number,
+  batch: number,
+  stop: StopConditions,
+  ran: number,
+): string {
   const ms = r.timings.generate + r.timings.score + r.timings.select + r.timings.train;
   const rate = ms > 0 ? Math.round((batch * 1000) / ms) : 0;
   let left = '';
   if (stop.minutes !== undefined) left = `  ${clock(Math.max(0, stop.minutes * 60_000 - elapsedMs))} left`;
-  else if (stop.iterations !== undefined && ran > 0) left = `  ~${clock(((stop.iterations - ran) * elapsedMs) / ran)} left`;
+  else if (stop.iterations !== undefined && ran > 0)
+    left = `  ~${clock(((stop.iterations - ran) * elapsedMs) / ran)} left`;
   const collapse = r.collapsed ? '  COLLAPSED' : '';
   const event = r.action === 'none' ? '' : `  ${r.action.toUpperCase()}`;
   return (

@@ -53,7 +53,11 @@ export function huntTarget(file: LoadedConjectureFile, c: Conjecture): HuntTarge
 }
 
 /** Stop conditions shared by hunt and resume. */
-export function stopConditions(flags: { iterations?: string; minutes?: string; untilFound?: boolean }): StopConditions {
+export function stopConditions(flags: {
+  iterations?: string;
+  minutes?: string;
+  untilFound?: boolean;
+}): StopConditions {
   return {
     iterations: integerOption('--iterations', flags.iterations, 0, 1e12),
     minutes: numberOption('--minutes', flags.minutes, 0, 1e7, true),
@@ -84,7 +88,10 @@ export function addHuntCommand(program: Command, outcome: CommandOutcome): void 
     .option('--keep <f>', `fraction of the batch carried over unchanged (default ${HUNT_DEFAULTS.keep})`)
     .option('--layers <widths>', `hidden layer widths (default ${HUNT_DEFAULTS.hidden.join(',')})`)
     .option('--learning-rate <r>', `Adam step size (default ${HUNT_DEFAULTS.learningRate})`)
-    .option('--train-graphs <k>', `whole graphs per training minibatch (default ${HUNT_DEFAULTS.trainGraphs})`)
+    .option(
+      '--train-graphs <k>',
+      `whole graphs per training minibatch (default ${HUNT_DEFAULTS.trainGraphs})`,
+    )
     .option('--iterations <k>', 'stop after k iterations')
     .option('--minutes <m>', 'stop after m minutes')
     .option('--until-found', 'stop at the first counterexample')
@@ -93,27 +100,52 @@ export function addHuntCommand(program: Command, outcome: CommandOutcome): void 
     .option('--out <dir>', 'run folder (default runs/<name>-seed<s>-<time>)')
     .action(async (file: string, flags: HuntFlags) => {
       const seed = flags.seed ?? '1';
-      if (seed === '' || seed.length > 200) throw new InputError(`--seed: expected 1..200 characters but found ${seed.length}`);
+      if (seed === '' || seed.length > 200)
+        throw new InputError(`--seed: expected 1..200 characters but found ${seed.length}`);
       const batch = integerOption('--batch', flags.batch, 2, 1_000_000) ?? HUNT_DEFAULTS.batch;
       const elite = numberOption('--elite', flags.elite, 0, 1, true) ?? HUNT_DEFAULTS.elite;
       const keep = numberOption('--keep', flags.keep, 0, 1) ?? HUNT_DEFAULTS.keep;
       const layers = layersOption('--layers', flags.layers) ?? [...HUNT_DEFAULTS.hidden];
-      const learningRate = numberOption('--learning-rate', flags.learningRate, 0, 10, true) ?? HUNT_DEFAULTS.learningRate;
-      const trainGraphs = integerOption('--train-graphs', flags.trainGraphs, 1, 100_000) ?? HUNT_DEFAULTS.trainGraphs;
+      const learningRate =
+        numberOption('--learning-rate', flags.learningRate, 0, 10, true) ?? HUNT_DEFAULTS.learningRate;
+      const trainGraphs =
+        integerOption('--train-graphs', flags.trainGraphs, 1, 100_000) ?? HUNT_DEFAULTS.trainGraphs;
       const stop = stopConditions(flags);
       const threads = threadsOption(flags.threads);
       const loaded = await loadConjectureFile(file);
       const conjecture = selectConjecture(loaded, flags.conjecture);
-      const vertices = integerOption('--vertices', flags.vertices, 2, HUNT_MAX_VERTICES) ?? conjecture.vertices;
+      const vertices =
+        integerOption('--vertices', flags.vertices, 2, HUNT_MAX_VERTICES) ?? conjecture.vertices;
       if (vertices < 2 || vertices > HUNT_MAX_VERTICES) {
-        throw new InputError(`conjecture '${conjecture.name}': hunt needs 2..${HUNT_MAX_VERTICES} vertices but the file says ${vertices}; pass --vertices`);
+        throw new InputError(
+          `conjecture '${conjecture.name}': hunt needs 2..${HUNT_MAX_VERTICES} vertices but the file says ${vertices}; pass --vertices`,
+        );
       }
-      const options: RunOptions = { vertices, seed, batch, elite, keep, layers, learningRate, trainGraphs, explore: flags.plain !== true };
+      const options: RunOptions = {
+        vertices,
+        seed,
+        batch,
+        elite,
+        keep,
+        layers,
+        learningRate,
+        trainGraphs,
+        explore: flags.plain !== true,
+      };
       const target = huntTarget(loaded, conjecture);
       const backend = await startTensorflow(1);
       const dir = flags.out ?? join('runs', runName(conjecture.name, seed));
       const manifest = createRun(dir, target, options, backend);
-      const { status } = await runSession({ tf, dir, manifest, target, state: freshState(manifest), stop, threads, resumed: false });
+      const { status } = await runSession({
+        tf,
+        dir,
+        manifest,
+        target,
+        state: freshState(manifest),
+        stop,
+        threads,
+        resumed: false,
+      });
       outcome.status = status;
     });
 }

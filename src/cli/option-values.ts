@@ -4,7 +4,12 @@
  */
 import { InputError } from '../errors.js';
 
-export function integerOption(name: string, text: string | undefined, min: number, max: number): number | undefined {
+export function integerOption(
+  name: string,
+  text: string | undefined,
+  min: number,
+  max: number,
+): number | undefined {
   if (text === undefined) return undefined;
   const x = Number(text);
   if (!/^\s*-?\d+\s*$/.test(text) || !Number.isSafeInteger(x) || x < min || x > max) {
@@ -13,11 +18,19 @@ export function integerOption(name: string, text: string | undefined, min: numbe
   return x;
 }
 
-export function numberOption(name: string, text: string | undefined, min: number, max: number, openMin = false): number | undefined {
+export function numberOption(
+  name: string,
+  text: string | undefined,
+  min: number,
+  max: number,
+  openMin = false,
+): number | undefined {
   if (text === undefined) return undefined;
   const x = Number(text);
   if (text.trim() === '' || !Number.isFinite(x) || x < min || x > max || (openMin && x === min)) {
-    throw new InputError(`${name}: expected a number in ${openMin ? '(' : '['}${min}, ${max}] but found '${text}'`);
+    throw new InputError(
+      `${name}: expected a number in ${openMin ? '(' : '['}${min}, ${max}] but found '${text}'`,
+    );
   }
   return x;
 }
@@ -28,7 +41,9 @@ export function layersOption(name: string, text: string | undefined): number[] |
   const parts = text.split(',').map((s) => s.trim());
   const out = parts.map((p) => Number(p));
   if (parts.length === 0 || parts.some((p) => !/^\d+$/.test(p)) || out.some((x) => x < 1 || x > 4096)) {
-    throw new InputError(`${name}: expected comma-separated layer widths in 1..4096 such as 128,64,4 but found '${text}'`);
+    throw new InputError(
+      `${name}: expected comma-separated layer widths in 1..4096 such as 128,64,4 but found '${text}'`,
+    );
   }
   return out;
 }

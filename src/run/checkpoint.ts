@@ -60,12 +60,22 @@ function decodeScore(x: unknown): number {
 }
 
 function storeCandidate(order: number, c: Candidate): StoredCandidate {
-  return { graph6: encodeGraph6(fromUpperTriangleBits(order, c.bits)), key: c.key, inDomain: c.inDomain, score: encodeScore(c.score) };
+  return {
+    graph6: encodeGraph6(fromUpperTriangleBits(order, c.bits)),
+    key: c.key,
+    inDomain: c.inDomain,
+    score: encodeScore(c.score),
+  };
 }
 
 function loadCandidate(s: StoredCandidate): Candidate {
   if (typeof s.key !== 'string' || typeof s.inDomain !== 'boolean') throw new TypeError('bad candidate');
-  return { bits: pairBitsOfGraph(decodeGraph6(s.graph6)), key: s.key, inDomain: s.inDomain, score: decodeScore(s.score) };
+  return {
+    bits: pairBitsOfGraph(decodeGraph6(s.graph6)),
+    key: s.key,
+    inDomain: s.inDomain,
+    score: decodeScore(s.score),
+  };
 }
 
 function sha256(data: Uint8Array): string {
@@ -95,7 +105,11 @@ export function writeCheckpoint(dir: string, runId: string, state: HuntState): v
     optimizerStep: state.optimizer.step,
     pool: state.pool.map((c) => storeCandidate(order, c)),
     best: state.best.map((c) => storeCandidate(order, c)),
-    counterexamples: state.counterexamples.map((c) => ({ key: c.key, score: encodeScore(c.score), certification: c.certification })),
+    counterexamples: state.counterexamples.map((c) => ({
+      key: c.key,
+      score: encodeScore(c.score),
+      certification: c.certification,
+    })),
     collapse: state.collapse,
     sha256: { weights: sha256(weights), optimizer: sha256(optimizer) },
   };
@@ -135,7 +149,9 @@ function readFrom(folder: string, runId: string): HuntState {
     throw corrupt(folder, `not a refute checkpoint of version ${CHECKPOINT_VERSION}`);
   }
   if (stored.runId !== runId) {
-    throw new InputError(`${folder}: the checkpoint belongs to another run (run id ${stored.runId}, run.json says ${runId}); refusing to resume`);
+    throw new InputError(
+      `${folder}: the checkpoint belongs to another run (run id ${stored.runId}, run.json says ${runId}); refusing to resume`,
+    );
   }
   let weightBytes: Buffer;
   let optimizerBytes: Buffer;
@@ -145,8 +161,10 @@ function readFrom(folder: string, runId: string): HuntState {
   } catch {
     throw corrupt(folder, 'weights.bin or optimizer.bin is missing');
   }
-  if (sha256(weightBytes) !== stored.sha256?.weights) throw corrupt(folder, 'weights.bin does not match its recorded sha256');
-  if (sha256(optimizerBytes) !== stored.sha256?.optimizer) throw corrupt(folder, 'optimizer.bin does not match its recorded sha256');
+  if (sha256(weightBytes) !== stored.sha256?.weights)
+    throw corrupt(folder, 'weights.bin does not match its recorded sha256');
+  if (sha256(optimizerBytes) !== stored.sha256?.optimizer)
+    throw corrupt(folder, 'optimizer.bin does not match its recorded sha256');
   try {
     const shape = stored.shape;
     const p = parameterCount(shape);
@@ -155,20 +173,23 @@ function readFrom(folder: string, runId: string): HuntState {
     new Uint8Array(w.buffer).set(weightBytes);
     const moments = new Float32Array(2 * p);
     new Uint8Array(moments.buffer).set(optimizerBytes);
-    if (!Number.isInteger(stored.iteration) || !Number.isInteger(stored.optimizerStep)) throw new TypeError('iteration');
+    if (!Number.isInteger(stored.iteration) || !Number.isInteger(stored.optimizerStep))
+      throw new TypeError('iteration');
     return {
       iteration: stored.iteration,
       weights: unflattenWeights(shape, w),
-      optimizer: { step: stored.optimizerStep, firstMoment: moments.slice(0, p), secondMoment: moments.slice(p) },
+      optimizer: {
+        step: stored.optimizerStep,
+        firstMoment: moments.slice(0, p),
+        secondMoment: moments.slice(p),
+      },
       pool: stored.pool.map(loadCandidate),
       best: stored.best.map(loadCandidate),
-      counterexamples: stored.counterexamples.map(
-        (c): CounterexampleRecord => ({
-          key: String(c.key),
-          score: decodeScore(c.score),
-          certification: c.certification === 'certified' ? 'certified' : 'numerical',
-        }),
-      ),
+      counterexamples: stored.counterexamples.map((c): CounterexampleRecord => ({
+        key: String(c.key),
+        score: decodeScore(c.score),
+        certification: c.certification === 'certified' ? 'certified' : 'numerical',
+      })),
       collapse: { ...stored.collapse },
     };
   } catch {
@@ -182,5 +203,7 @@ export function readCheckpoint(dir: string, runId: string): HuntState {
   const old = join(dir, 'checkpoint.old');
   if (existsSync(join(current, 'state.json'))) return readFrom(current, runId);
   if (existsSync(join(old, 'state.json'))) return readFrom(old, runId);
-  throw new InputError(`${dir}: no checkpoint found (checkpoint/ is missing); the run stopped before its first iteration, start it again with 'refute hunt'`);
+  throw new InputError(
+    `${dir}: no checkpoint found (checkpoint/ is missing); the run stopped before its first iteration, start it again with 'refute hunt'`,
+  );
 }

@@ -76,14 +76,23 @@ export function fileSha256(path: string): string {
 }
 
 /** Creates the run directory (which must not exist or be empty) and its manifest. */
-export function createRun(dir: string, target: HuntTarget, options: RunOptions, backend: string): RunManifest {
+export function createRun(
+  dir: string,
+  target: HuntTarget,
+  options: RunOptions,
+  backend: string,
+): RunManifest {
   if (existsSync(dir) && readdirSync(dir).length > 0) {
-    throw new InputError(`${dir}: the output folder exists and is not empty; choose another --out, or continue that run with 'refute resume ${dir}'`);
+    throw new InputError(
+      `${dir}: the output folder exists and is not empty; choose another --out, or continue that run with 'refute resume ${dir}'`,
+    );
   }
   try {
     mkdirSync(dir, { recursive: true });
   } catch (err) {
-    throw new InputError(`${dir}: cannot create the output folder (${(err as NodeJS.ErrnoException).code ?? String(err)})`);
+    throw new InputError(
+      `${dir}: cannot create the output folder (${(err as NodeJS.ErrnoException).code ?? String(err)})`,
+    );
   }
   const manifest: RunManifest = {
     format: 'refute-run',
@@ -169,7 +178,11 @@ function logIteration(log: RunLogger, r: IterationReport, state: HuntState, batc
 export function persist(dir: string, manifest: RunManifest, state: HuntState): void {
   writeBest(dir, state);
   writeSummary(dir, state, {
-    conjecture: { name: manifest.conjecture.name, path: manifest.conjecture.path, sha256: manifest.conjecture.sha256 },
+    conjecture: {
+      name: manifest.conjecture.name,
+      path: manifest.conjecture.path,
+      sha256: manifest.conjecture.sha256,
+    },
     iterations: state.iteration,
     perturbations: state.collapse.perturbations,
     restarts: state.collapse.restarts,
@@ -187,7 +200,10 @@ export async function driveRun(ctx: DriveContext, initial: HuntState): Promise<D
   const { dir, manifest } = ctx;
   const options = huntOptionsOf(manifest.options, manifest.conjecture.connected);
   const log = openRunLog(dir);
-  log.info({ event: ctx.resumed ? 'resume' : 'start', iteration: initial.iteration, backend: manifest.backend }, ctx.resumed ? 'resume' : 'start');
+  log.info(
+    { event: ctx.resumed ? 'resume' : 'start', iteration: initial.iteration, backend: manifest.backend },
+    ctx.resumed ? 'resume' : 'start',
+  );
   if (!ctx.resumed) persist(dir, manifest, initial);
   let state = initial;
   const started = performance.now();
@@ -218,14 +234,31 @@ export async function driveRun(ctx: DriveContext, initial: HuntState): Promise<D
     persist(dir, manifest, next);
     logIteration(log, report, next, options.batch);
     for (const c of written) {
-      log.info({ event: 'counterexample', iteration: report.iteration, graph6: c.key, score: jsonNumber(c.score), certification: c.certification }, 'counterexample');
+      log.info(
+        {
+          event: 'counterexample',
+          iteration: report.iteration,
+          graph6: c.key,
+          score: jsonNumber(c.score),
+          certification: c.certification,
+        },
+        'counterexample',
+      );
       await ctx.onCounterexample?.(c);
     }
     state = next;
     ran++;
     ctx.onIteration?.(report, state, performance.now() - started);
   }
-  log.info({ event: 'stop', iteration: state.iteration, reason: stoppedBy, counterexamples: state.counterexamples.length }, 'stop');
+  log.info(
+    {
+      event: 'stop',
+      iteration: state.iteration,
+      reason: stoppedBy,
+      counterexamples: state.counterexamples.length,
+    },
+    'stop',
+  );
   log.flush();
   return { state, iterationsRun: ran, stoppedBy };
 }

@@ -10,6 +10,11 @@ import pino from 'pino';
 export type RunLogger = pino.Logger;
 
 export function openRunLog(dir: string): RunLogger {
-  const destination = pino.destination({ dest: join(dir, 'log.jsonl'), sync: true, append: true, mkdir: false });
+  const destination = pino.destination({
+    dest: join(dir, 'log.jsonl'),
+    sync: true,
+    append: true,
+    mkdir: false,
+  });
   return pino({ base: null, timestamp: pino.stdTimeFunctions.isoTime }, destination);
 }

@@ -31,7 +31,12 @@ export interface RunManifest {
   /** Random id tying the checkpoint to this run. */
   readonly runId: string;
   readonly toolVersion: string;
-  readonly conjecture: { readonly path: string; readonly sha256: string; readonly name: string; readonly connected: boolean };
+  readonly conjecture: {
+    readonly path: string;
+    readonly sha256: string;
+    readonly name: string;
+    readonly connected: boolean;
+  };
   readonly options: RunOptions;
   readonly backend: string;
   readonly startedAt: string;
@@ -56,13 +61,17 @@ export function readManifest(dir: string): RunManifest {
   try {
     text = readFileSync(path, 'utf8');
   } catch {
-    throw new InputError(`${path}: cannot read the run manifest; is '${dir}' a run directory made by 'refute hunt'?`);
+    throw new InputError(
+      `${path}: cannot read the run manifest; is '${dir}' a run directory made by 'refute hunt'?`,
+    );
   }
   let m: Partial<RunManifest>;
   try {
     m = JSON.parse(text) as Partial<RunManifest>;
   } catch {
-    throw new InputError(`${path}: the run manifest is not valid JSON (corrupt file); start a new run with 'refute hunt'`);
+    throw new InputError(
+      `${path}: the run manifest is not valid JSON (corrupt file); start a new run with 'refute hunt'`,
+    );
   }
   const o = m.options as Partial<RunOptions> | undefined;
   const c = m.conjecture;
@@ -86,6 +95,9 @@ export function readManifest(dir: string): RunManifest {
     typeof o.learningRate === 'number' &&
     Number.isInteger(o.trainGraphs) &&
     typeof o.explore === 'boolean';
-  if (!ok) throw new InputError(`${path}: not a refute run manifest of version ${MANIFEST_VERSION} (missing or malformed fields)`);
+  if (!ok)
+    throw new InputError(
+      `${path}: not a refute run manifest of version ${MANIFEST_VERSION} (missing or malformed fields)`,
+    );
   return m as RunManifest;
 }

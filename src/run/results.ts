@@ -42,7 +42,10 @@ export function readCounterexampleLines(dir: string): string[] {
 }
 
 /** Appends the records not yet in counterexamples.g6 (by key) and returns those appended. */
-export function appendCounterexamples(dir: string, records: readonly CounterexampleRecord[]): CounterexampleRecord[] {
+export function appendCounterexamples(
+  dir: string,
+  records: readonly CounterexampleRecord[],
+): CounterexampleRecord[] {
   if (records.length === 0) return [];
   const present = new Set(readCounterexampleLines(dir));
   const fresh = records.filter((r) => !present.has(r.key));

@@ -19,7 +19,16 @@ export interface WorkerInit {
 }
 
 export type WorkerRequest =
-  | { kind: 'sample'; id: number; shape: PolicyShape; weights: Float32Array; iteration: number; firstEpisode: number; count: number; clamp: number }
+  | {
+      kind: 'sample';
+      id: number;
+      shape: PolicyShape;
+      weights: Float32Array;
+      iteration: number;
+      firstEpisode: number;
+      count: number;
+      clamp: number;
+    }
   | { kind: 'evaluate'; id: number; order: number; bits: Uint8Array; count: number };
 
 const init = workerData as WorkerInit;
@@ -34,19 +43,37 @@ async function start(): Promise<void> {
     try {
       if (req.kind === 'sample') {
         const sampler = new FastSampler(tf, unflattenWeights(req.shape, req.weights));
-        const out = sampler.sample({ seed: init.seed, iteration: req.iteration, firstEpisode: req.firstEpisode, count: req.count, clamp: req.clamp });
+        const out = sampler.sample({
+          seed: init.seed,
+          iteration: req.iteration,
+          firstEpisode: req.firstEpisode,
+          count: req.count,
+          clamp: req.clamp,
+        });
         sampler.dispose();
-        port.postMessage({ id: req.id, bits: out.bits, entropySums: out.entropySums }, [out.bits.buffer as ArrayBuffer, out.entropySums.buffer as ArrayBuffer]);
+        port.postMessage({ id: req.id, bits: out.bits, entropySums: out.entropySums }, [
+          out.bits.buffer as ArrayBuffer,
+          out.entropySums.buffer as ArrayBuffer,
+        ]);
       } else {
         const n = pairCount(req.order);
         const evaluations = [];
         for (let b = 0; b < req.count; b++) {
-          evaluations.push(evaluateConjecture(conjecture, fromUpperTriangleBits(req.order, req.bits.subarray(b * n, (b + 1) * n))));
+          evaluations.push(
+            evaluateConjecture(
+              conjecture,
+              fromUpperTriangleBits(req.order, req.bits.subarray(b * n, (b + 1) * n)),
+            ),
+          );
         }
         port.postMessage({ id: req.id, evaluations });
       }
     } catch (err) {
-      port.postMessage({ id: req.id, error: err instanceof Error ? err.message : String(err), inputError: err instanceof InputError });
+      port.postMessage({
+        id: req.id,
+        error: err instanceof Error ? err.message : String(err),
+        inputError: err instanceof InputError,
+      });
     }
   });
   port.postMessage({ ready: true });

@@ -72,7 +72,11 @@ export function collapseStep(
 ): { state: CollapseState; action: CollapseAction; collapsed: boolean } {
   const collapsed = isCollapsed(signals, settings);
   if (signals.improved) {
-    return { state: { ...state, staleIterations: 0, perturbationsSinceImprovement: 0 }, action: 'none', collapsed };
+    return {
+      state: { ...state, staleIterations: 0, perturbationsSinceImprovement: 0 },
+      action: 'none',
+      collapsed,
+    };
   }
   const stale = state.staleIterations + 1;
   if (!collapsed || stale < settings.patience) {
@@ -80,7 +84,12 @@ export function collapseStep(
   }
   if (state.perturbationsSinceImprovement + 1 >= settings.restartAfter) {
     return {
-      state: { staleIterations: 0, perturbationsSinceImprovement: 0, perturbations: state.perturbations, restarts: state.restarts + 1 },
+      state: {
+        staleIterations: 0,
+        perturbationsSinceImprovement: 0,
+        perturbations: state.perturbations,
+        restarts: state.restarts + 1,
+      },
       action: 'restart',
       collapsed,
     };

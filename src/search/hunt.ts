@@ -10,10 +10,24 @@
 import { fromUpperTriangleBits } from '../graph/builders.js';
 import { type Graph } from '../graph/graph.js';
 import { type TfModule } from './backend.js';
-import { COLLAPSE_DEFAULTS, type CollapseAction, type CollapseSettings, type CollapseState, FRESH_COLLAPSE_STATE, collapseStep } from './collapse.js';
+import {
+  COLLAPSE_DEFAULTS,
+  type CollapseAction,
+  type CollapseSettings,
+  type CollapseState,
+  FRESH_COLLAPSE_STATE,
+  collapseStep,
+} from './collapse.js';
 import { connectComponentsInPlace } from './connect-repair.js';
 import { graphKey } from './graph-key.js';
-import { type PolicyShape, type PolicyWeights, initialWeights, pairCount, parameterCount, perturbedWeights } from './policy.js';
+import {
+  type PolicyShape,
+  type PolicyWeights,
+  initialWeights,
+  pairCount,
+  parameterCount,
+  perturbedWeights,
+} from './policy.js';
 import { iterationRng } from './random.js';
 import { type SampledBatch } from './sampler.js';
 import { type Candidate, distinctCount, mergeBest, rankCandidates, takeTop } from './selection.js';
@@ -166,7 +180,12 @@ export async function runIteration(
     const e = evaluations[b];
     if (e.inDomain) inDomain++;
     freshGraphs.push(g);
-    fresh.push({ bits: own, key: graphKey(g), inDomain: e.inDomain, score: e.inDomain ? e.score : -Infinity });
+    fresh.push({
+      bits: own,
+      key: graphKey(g),
+      inDomain: e.inDomain,
+      score: e.inDomain ? e.score : -Infinity,
+    });
   }
   const tScore = performance.now() - t0;
 
@@ -205,14 +224,26 @@ export async function runIteration(
   const eliteBits = new Uint8Array(elite.length * n);
   elite.forEach((c, i) => eliteBits.set(c.bits, i * n));
   const adam = { ...ADAM_DEFAULTS, learningRate: o.learningRate };
-  const trained = trainEpoch(tf, state.weights, state.optimizer, eliteBits, adam, o.trainGraphs, iterationRng(o.seed, 'train', t));
+  const trained = trainEpoch(
+    tf,
+    state.weights,
+    state.optimizer,
+    eliteBits,
+    adam,
+    o.trainGraphs,
+    iterationRng(o.seed, 'train', t),
+  );
   let weights = trained.weights;
   let optimizer = trained.optimizer;
   let collapse = state.collapse;
   let action: CollapseAction = 'none';
   let collapsed = false;
   if (o.explore) {
-    const step = collapseStep(state.collapse, { distinctFraction, meanEntropy: sampled.meanEntropy, improved }, o.collapse);
+    const step = collapseStep(
+      state.collapse,
+      { distinctFraction, meanEntropy: sampled.meanEntropy, improved },
+      o.collapse,
+    );
     collapse = step.state;
     action = step.action;
     collapsed = step.collapsed;

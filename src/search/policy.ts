@@ -105,7 +105,9 @@ export function flattenWeights(w: PolicyWeights): Float32Array {
 /** Inverse of {@link flattenWeights}. */
 export function unflattenWeights(shape: PolicyShape, flat: Float32Array): PolicyWeights {
   if (flat.length !== parameterCount(shape)) {
-    throw new RangeError(`Expected ${parameterCount(shape)} parameters for this policy shape but found ${flat.length}`);
+    throw new RangeError(
+      `Expected ${parameterCount(shape)} parameters for this policy shape but found ${flat.length}`,
+    );
   }
   const s = layerSizes(shape);
   const kernels: Float32Array[] = [];

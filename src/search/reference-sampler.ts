@@ -15,7 +15,9 @@ export function sampleWithPredict(tf: TfModule, weights: PolicyWeights, req: Sam
   const count = req.count;
   const bits = new Uint8Array(count * n);
   const input = new Float32Array(count * 2 * n);
-  const rngs = Array.from({ length: count }, (_, b) => episodeRng(req.seed, req.iteration, req.firstEpisode + b));
+  const rngs = Array.from({ length: count }, (_, b) =>
+    episodeRng(req.seed, req.iteration, req.firstEpisode + b),
+  );
   for (let i = 0; i < n; i++) {
     for (let b = 0; b < count; b++) {
       if (i > 0) input[b * 2 * n + n + i - 1] = 0;

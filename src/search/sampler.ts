@@ -106,7 +106,9 @@ export class FastSampler {
     const count = req.count;
     const bits = new Uint8Array(count * n);
     const probabilities = req.recordProbabilities ? new Float32Array(count * n) : undefined;
-    const rngs = Array.from({ length: count }, (_, b) => episodeRng(req.seed, req.iteration, req.firstEpisode + b));
+    const rngs = Array.from({ length: count }, (_, b) =>
+      episodeRng(req.seed, req.iteration, req.firstEpisode + b),
+    );
     const column = new Float32Array(count);
     const lo = req.clamp;
     const hi = 1 - req.clamp;
@@ -143,14 +145,24 @@ export class FastSampler {
       if (any && i + 1 < n) {
         const next = tf.tidy(
           () =>
-            tf.add(pre, tf.mul(tf.tensor2d(column, [count, 1]), tf.slice(this.edgeRows, [i, 0], [1, width]))) as tfTypes.Tensor2D,
+            tf.add(
+              pre,
+              tf.mul(tf.tensor2d(column, [count, 1]), tf.slice(this.edgeRows, [i, 0], [1, width])),
+            ) as tfTypes.Tensor2D,
         );
         pre.dispose();
         pre = next;
       }
     }
     pre.dispose();
-    return { order: this.order, count, bits, meanEntropy: meanOfSums(entropySums, n), entropySums, probabilities };
+    return {
+      order: this.order,
+      count,
+      bits,
+      meanEntropy: meanOfSums(entropySums, n),
+      entropySums,
+      probabilities,
+    };
   }
 
   /** Frees the tensors. */

@@ -59,7 +59,11 @@ export function distinctCount(candidates: readonly Candidate[]): number {
  * The best-ever list after a batch: in-domain graphs only, distinct keys, best first, at most
  * `capacity`. Earlier entries win ties, so the list does not churn between equal graphs.
  */
-export function mergeBest(best: readonly Candidate[], batch: readonly Candidate[], capacity: number): Candidate[] {
+export function mergeBest(
+  best: readonly Candidate[],
+  batch: readonly Candidate[],
+  capacity: number,
+): Candidate[] {
   const merged = rankCandidates([...best, ...batch.filter((c) => c.inDomain)]);
   return takeTop(merged, capacity, true);
 }

@@ -76,7 +76,11 @@ export function denseLogits(tf: TfModule, params: tfTypes.Tensor[], x: tfTypes.T
  * sum_{j<i} bit_j * W1[j] + W1[N+i] + b1, i.e. an exclusive cumulative sum along the positions.
  * That costs G*N*h1 instead of G*N*2N*h1, and tfjs differentiates it like any other op.
  */
-export function prefixLogits(tf: TfModule, params: tfTypes.Tensor[], bits: tfTypes.Tensor2D): tfTypes.Tensor2D {
+export function prefixLogits(
+  tf: TfModule,
+  params: tfTypes.Tensor[],
+  bits: tfTypes.Tensor2D,
+): tfTypes.Tensor2D {
   const [graphs, n] = bits.shape;
   const w1 = params[0] as tfTypes.Tensor2D;
   const width = w1.shape[1];
@@ -84,7 +88,10 @@ export function prefixLogits(tf: TfModule, params: tfTypes.Tensor[], bits: tfTyp
   const positionRows = tf.slice(w1, [n, 0], [n, width]);
   // Laid out [G, h1, N] so the sum runs along the last axis: tfjs 4.22's Cumsum gradient
   // returns a wrongly shaped result for any other axis.
-  const contributions = tf.mul(tf.reshape(bits, [graphs, 1, n]), tf.reshape(tf.transpose(edgeRows), [1, width, n]));
+  const contributions = tf.mul(
+    tf.reshape(bits, [graphs, 1, n]),
+    tf.reshape(tf.transpose(edgeRows), [1, width, n]),
+  );
   const edgeTerm = tf.transpose(tf.cumsum(contributions, 2, true), [0, 2, 1]);
   const pre = tf.add(tf.add(edgeTerm, tf.reshape(positionRows, [1, n, width])), params[1]);
   let h: tfTypes.Tensor2D = tf.reshape(pre, [graphs * n, width]);
@@ -97,7 +104,11 @@ export function prefixLogits(tf: TfModule, params: tfTypes.Tensor[], bits: tfTyp
 }
 
 /** Mean binary cross-entropy of sigmoid(logits) against 0/1 targets (stable form). */
-export function meanCrossEntropy(tf: TfModule, logits: tfTypes.Tensor2D, targets: tfTypes.Tensor2D): tfTypes.Scalar {
+export function meanCrossEntropy(
+  tf: TfModule,
+  logits: tfTypes.Tensor2D,
+  targets: tfTypes.Tensor2D,
+): tfTypes.Scalar {
   return tf.losses.sigmoidCrossEntropy(targets, logits) as tfTypes.Scalar;
 }
 
@@ -166,11 +177,15 @@ export function trainEpoch(
     }
     step += 1;
     // Kingma & Ba, end of Section 2: alpha_t = alpha * sqrt(1 - beta2^t) / (1 - beta1^t).
-    const stepSize = (adam.learningRate * Math.sqrt(1 - Math.pow(adam.beta2, step))) / (1 - Math.pow(adam.beta1, step));
+    const stepSize =
+      (adam.learningRate * Math.sqrt(1 - Math.pow(adam.beta2, step))) / (1 - Math.pow(adam.beta1, step));
     const loss = tf.tidy(() => {
       const bt = tf.tensor2d(batchBits.subarray(0, count * n), [count, n]);
       const ys = tf.reshape(bt, [count * n, 1]) as tfTypes.Tensor2D;
-      const { value, grads } = tf.variableGrads(() => meanCrossEntropy(tf, prefixLogits(tf, vars, bt), ys), vars);
+      const { value, grads } = tf.variableGrads(
+        () => meanCrossEntropy(tf, prefixLogits(tf, vars, bt), ys),
+        vars,
+      );
       for (let p = 0; p < vars.length; p++) {
         const g = grads[vars[p].name];
         const m = tf.add(tf.mul(ms[p], adam.beta1), tf.mul(g, 1 - adam.beta1));
@@ -203,4 +218,3 @@ export function trainEpoch(
   tf.dispose([...vars, ...ms, ...vs]);
   return result;
 }
-

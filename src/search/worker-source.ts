@@ -82,18 +82,36 @@ export function splitRange(count: number, parts: number): Array<{ start: number;
   return out;
 }
 
-export async function workerBatchSource(threads: number, seed: string, conjecturePath: string, conjectureName: string): Promise<BatchSource> {
+export async function workerBatchSource(
+  threads: number,
+  seed: string,
+  conjecturePath: string,
+  conjectureName: string,
+): Promise<BatchSource> {
   const data: WorkerInit = { seed, conjecturePath, conjectureName };
   const handles = Array.from({ length: threads }, () => new WorkerHandle(startWorker(data)));
   await Promise.all(handles.map((h) => h.ready));
   return {
-    async sample(weights: PolicyWeights, iteration: number, count: number, clamp: number): Promise<SampledBatch> {
+    async sample(
+      weights: PolicyWeights,
+      iteration: number,
+      count: number,
+      clamp: number,
+    ): Promise<SampledBatch> {
       const n = pairCount(weights.shape.order);
       const flat = flattenWeights(weights);
       const ranges = splitRange(count, handles.length);
       const replies = await Promise.all(
         ranges.map((r, k) =>
-          handles[k].request({ kind: 'sample', shape: weights.shape, weights: flat, iteration, firstEpisode: r.start, count: r.size, clamp }),
+          handles[k].request({
+            kind: 'sample',
+            shape: weights.shape,
+            weights: flat,
+            iteration,
+            firstEpisode: r.start,
+            count: r.size,
+            clamp,
+          }),
         ),
       );
       const bits = new Uint8Array(count * n);
@@ -102,13 +120,26 @@ export async function workerBatchSource(threads: number, seed: string, conjectur
         bits.set(replies[k].bits as Uint8Array, r.start * n);
         entropySums.set(replies[k].entropySums as Float64Array, r.start);
       });
-      return { order: weights.shape.order, count, bits, entropySums, meanEntropy: meanOfSums(entropySums, n) };
+      return {
+        order: weights.shape.order,
+        count,
+        bits,
+        entropySums,
+        meanEntropy: meanOfSums(entropySums, n),
+      };
     },
     async evaluate(order: number, bits: Uint8Array, count: number): Promise<Evaluation[]> {
       const n = pairCount(order);
       const ranges = splitRange(count, handles.length);
       const replies = await Promise.all(
-        ranges.map((r, k) => handles[k].request({ kind: 'evaluate', order, bits: bits.slice(r.start * n, (r.start + r.size) * n), count: r.size })),
+        ranges.map((r, k) =>
+          handles[k].request({
+            kind: 'evaluate',
+            order,
+            bits: bits.slice(r.start * n, (r.start + r.size) * n),
+            count: r.size,
+          }),
+        ),
       );
       return replies.flatMap((r) => r.evaluations as Evaluation[]);
     },

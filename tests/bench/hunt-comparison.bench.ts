@@ -16,7 +16,13 @@ import { startTensorflow, tf } from '../../src/search/backend.js';
 import { type Graph } from '../../src/graph/graph.js';
 import { InvariantMemo } from '../../src/invariants/registry.js';
 import { judgeCounterexample } from '../../src/search/counterexample.js';
-import { type Evaluation, HUNT_DEFAULTS, type HuntOptions, initialHuntState, runIteration } from '../../src/search/hunt.js';
+import {
+  type Evaluation,
+  HUNT_DEFAULTS,
+  type HuntOptions,
+  initialHuntState,
+  runIteration,
+} from '../../src/search/hunt.js';
 import { localBatchSource } from '../../src/search/local-source.js';
 
 interface Claim {
@@ -31,7 +37,9 @@ const mantel = (order: number): Claim => ({
   order,
   connected: false,
   evaluate: (g) =>
-    new InvariantMemo(g).get('triangleCount') !== 0 ? { inDomain: false } : { inDomain: true, score: g.size - Math.floor((order * order) / 4) + 0.5 },
+    new InvariantMemo(g).get('triangleCount') !== 0
+      ? { inDomain: false }
+      : { inDomain: true, score: g.size - Math.floor((order * order) / 4) + 0.5 },
 });
 
 const CLAIMS: Claim[] = [
@@ -49,18 +57,41 @@ const CLAIMS: Claim[] = [
   },
 ];
 
-async function firstFound(claim: Claim, seed: string, explore: boolean, budget: number, batch: number): Promise<{ iteration: number | null; seconds: number; restarts: number; perturbations: number }> {
-  const o: HuntOptions = { ...HUNT_DEFAULTS, seed, order: claim.order, batch, connected: claim.connected, explore };
+async function firstFound(
+  claim: Claim,
+  seed: string,
+  explore: boolean,
+  budget: number,
+  batch: number,
+): Promise<{ iteration: number | null; seconds: number; restarts: number; perturbations: number }> {
+  const o: HuntOptions = {
+    ...HUNT_DEFAULTS,
+    seed,
+    order: claim.order,
+    batch,
+    connected: claim.connected,
+    explore,
+  };
   const source = localBatchSource(tf, seed, claim.evaluate);
   let state = initialHuntState(o);
   const t0 = performance.now();
   for (let i = 0; i < budget; i++) {
     state = (await runIteration(tf, o, state, source, judgeCounterexample)).state;
     if (state.counterexamples.length > 0) {
-      return { iteration: i, seconds: (performance.now() - t0) / 1000, restarts: state.collapse.restarts, perturbations: state.collapse.perturbations };
+      return {
+        iteration: i,
+        seconds: (performance.now() - t0) / 1000,
+        restarts: state.collapse.restarts,
+        perturbations: state.collapse.perturbations,
+      };
     }
   }
-  return { iteration: null, seconds: (performance.now() - t0) / 1000, restarts: state.collapse.restarts, perturbations: state.collapse.perturbations };
+  return {
+    iteration: null,
+    seconds: (performance.now() - t0) / 1000,
+    restarts: state.collapse.restarts,
+    perturbations: state.collapse.perturbations,
+  };
 }
 
 export default async function huntComparisonBench(): Promise<void> {
@@ -68,16 +99,22 @@ export default async function huntComparisonBench(): Promise<void> {
   const seeds = Number(process.env.BENCH_SEEDS ?? 3);
   const budget = Number(process.env.BENCH_ITERATIONS ?? 200);
   const batch = Number(process.env.BENCH_BATCH ?? 500);
-  console.log(`first counterexample: iteration (seconds); '-' = none within ${budget} iterations; batch ${batch}`);
+  console.log(
+    `first counterexample: iteration (seconds); '-' = none within ${budget} iterations; batch ${batch}`,
+  );
   console.log(`claim            seed  with collapse handling            plain method`);
   for (const claim of CLAIMS) {
     for (let s = 1; s <= seeds; s++) {
       const a = await firstFound(claim, String(s), true, budget, batch);
       const b = await firstFound(claim, String(s), false, budget, batch);
       const show = (r: typeof a, extra: boolean): string =>
-        (r.iteration === null ? `-  (${r.seconds.toFixed(0)} s)` : `${r.iteration}  (${r.seconds.toFixed(1)} s)`) +
+        (r.iteration === null
+          ? `-  (${r.seconds.toFixed(0)} s)`
+          : `${r.iteration}  (${r.seconds.toFixed(1)} s)`) +
         (extra ? `  perturb ${r.perturbations} restart ${r.restarts}` : '');
-      console.log(`${claim.name.padEnd(16)} ${String(s).padStart(4)}  ${show(a, true).padEnd(32)}  ${show(b, false)}`);
+      console.log(
+        `${claim.name.padEnd(16)} ${String(s).padStart(4)}  ${show(a, true).padEnd(32)}  ${show(b, false)}`,
+      );
     }
   }
 }

@@ -37,8 +37,14 @@ export default async function samplerBench(): Promise<void> {
   const parallel = await bestOf(5, () => workers.sample(weights, 0, 1000, 0));
   await workers.close?.();
   const plain = await bestOf(1, () => sampleWithPredict(tf, weights, request));
-  console.log(`backend ${backend}; 1000 graphs, n = 19 (171 decisions), layers 128,64,4; best of 5 (plain: 1 run)`);
+  console.log(
+    `backend ${backend}; 1000 graphs, n = 19 (171 decisions), layers 128,64,4; best of 5 (plain: 1 run)`,
+  );
   console.log(`  plain predict per step    ${plain.toFixed(0).padStart(6)} ms`);
-  console.log(`  fast sampler, 1 thread    ${fast.toFixed(0).padStart(6)} ms   ${(plain / fast).toFixed(1)}x plain   (target <= 100 ms, >= 50x)`);
-  console.log(`  fast sampler, 2 workers   ${parallel.toFixed(0).padStart(6)} ms   ${(plain / parallel).toFixed(1)}x plain`);
+  console.log(
+    `  fast sampler, 1 thread    ${fast.toFixed(0).padStart(6)} ms   ${(plain / fast).toFixed(1)}x plain   (target <= 100 ms, >= 50x)`,
+  );
+  console.log(
+    `  fast sampler, 2 workers   ${parallel.toFixed(0).padStart(6)} ms   ${(plain / parallel).toFixed(1)}x plain`,
+  );
 }

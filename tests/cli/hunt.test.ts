@@ -12,7 +12,8 @@ const work = mkdtempSync(join(tmpdir(), 'refute-hunt-cli-'));
 const falseClaim = join(work, 'max-degree-7.ts');
 copyFileSync(join(fixtures, 'max-degree-7.ts'), falseClaim);
 const small = ['--batch', '60', '--layers', '32,16,4', '--seed', 'cli'];
-const same = (a: string, b: string, f: string): boolean => readFileSync(join(a, f)).equals(readFileSync(join(b, f)));
+const same = (a: string, b: string, f: string): boolean =>
+  readFileSync(join(a, f)).equals(readFileSync(join(b, f)));
 
 describe('refute hunt / resume / dump (end to end)', () => {
   test('hunt exits 0 on a false claim, prints its counterexamples as graph6 and writes the run folder', async () => {
@@ -25,10 +26,20 @@ describe('refute hunt / resume / dump (end to end)', () => {
     // Each printed graph really refutes the claim: a vertex of degree 6 (checked on the decoded graph).
     for (const line of printed) expect(Math.max(...decodeGraph6(line).degrees)).toBe(6);
     expect(readFileSync(join(out, 'counterexamples.g6'), 'utf8')).toBe(printed.map((l) => l + '\n').join(''));
-    for (const f of ['run.json', 'best.g6', 'summary.json', 'log.jsonl', 'checkpoint/state.json', 'checkpoint/weights.bin']) {
+    for (const f of [
+      'run.json',
+      'best.g6',
+      'summary.json',
+      'log.jsonl',
+      'checkpoint/state.json',
+      'checkpoint/weights.bin',
+    ]) {
       expect(existsSync(join(out, f)), f).toBe(true);
     }
-    const log = readFileSync(join(out, 'log.jsonl'), 'utf8').trim().split('\n').map((l) => JSON.parse(l));
+    const log = readFileSync(join(out, 'log.jsonl'), 'utf8')
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
     expect(log.filter((l) => l.event === 'iteration').map((l) => l.iteration)).toEqual([0, 1]);
     const summary = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
     expect(summary.counterexamples[0].certification).toBe('numerical');
@@ -40,11 +51,24 @@ describe('refute hunt / resume / dump (end to end)', () => {
     const best = readFileSync(join(out, 'best.g6'), 'utf8').split('\n')[0];
     expect(edges.stdout.split('\n')[0]).toBe(`7 ${decodeGraph6(best).size}`);
     const json = await runCli(['dump', out, '--top', '2', '--format', 'json']);
-    expect(json.stdout.trim().split('\n').map((l) => JSON.parse(l).graph6)).toEqual(readFileSync(join(out, 'best.g6'), 'utf8').split('\n').slice(0, 2));
+    expect(
+      json.stdout
+        .trim()
+        .split('\n')
+        .map((l) => JSON.parse(l).graph6),
+    ).toEqual(readFileSync(join(out, 'best.g6'), 'utf8').split('\n').slice(0, 2));
   });
 
   test('hunt exits 1 on a true claim', async () => {
-    const r = await runCli(['hunt', join(fixtures, 'max-degree-true-7.ts'), ...small, '--iterations', '2', '--out', join(work, 'none')]);
+    const r = await runCli([
+      'hunt',
+      join(fixtures, 'max-degree-true-7.ts'),
+      ...small,
+      '--iterations',
+      '2',
+      '--out',
+      join(work, 'none'),
+    ]);
     expect(r.status).toBe(1);
     expect(r.stdout).toBe('');
     expect(readFileSync(join(work, 'none', 'best.g6'), 'utf8').split('\n').length).toBeGreaterThan(2);
@@ -70,9 +94,20 @@ describe('refute hunt / resume / dump (end to end)', () => {
     const one = join(work, 't1');
     const two = join(work, 't2');
     await runCli(['hunt', falseClaim, ...small, '--iterations', '3', '--out', one, '--threads', '1']);
-    const r = await runCli(['hunt', falseClaim, ...small, '--iterations', '3', '--out', two, '--threads', '2']);
+    const r = await runCli([
+      'hunt',
+      falseClaim,
+      ...small,
+      '--iterations',
+      '3',
+      '--out',
+      two,
+      '--threads',
+      '2',
+    ]);
     expect(r.stderr).toBe('');
-    for (const f of ['best.g6', 'counterexamples.g6', 'checkpoint/weights.bin', 'checkpoint/optimizer.bin']) expect(same(one, two, f), f).toBe(true);
+    for (const f of ['best.g6', 'counterexamples.g6', 'checkpoint/weights.bin', 'checkpoint/optimizer.bin'])
+      expect(same(one, two, f), f).toBe(true);
   });
 
   test('resume refuses a changed conjecture file and a corrupt checkpoint (exit 2, one line)', async () => {
@@ -83,12 +118,16 @@ describe('refute hunt / resume / dump (end to end)', () => {
     writeFileSync(file, readFileSync(file, 'utf8').replace('5.5', '5.25'));
     const changed = await runCli(['resume', dir, '--iterations', '1']);
     expect(changed.status).toBe(2);
-    expect(changed.stderr).toMatch(/^refute: .*edited\.ts: the conjecture file changed since the run started .*\n$/);
+    expect(changed.stderr).toMatch(
+      /^refute: .*edited\.ts: the conjecture file changed since the run started .*\n$/,
+    );
     copyFileSync(join(fixtures, 'max-degree-7.ts'), file);
     writeFileSync(join(dir, 'checkpoint', 'optimizer.bin'), 'garbage');
     const corrupt = await runCli(['resume', dir, '--iterations', '1']);
     expect(corrupt.status).toBe(2);
-    expect(corrupt.stderr).toMatch(/^refute: .*corrupt checkpoint \(optimizer\.bin does not match its recorded sha256\).*\n$/);
+    expect(corrupt.stderr).toMatch(
+      /^refute: .*corrupt checkpoint \(optimizer\.bin does not match its recorded sha256\).*\n$/,
+    );
   });
 
   test('a hunt killed with SIGKILL resumes from its last checkpoint and ends as an uninterrupted run', async () => {
@@ -97,9 +136,15 @@ describe('refute hunt / resume / dump (end to end)', () => {
     const total = 10;
     await runCli(['hunt', falseClaim, ...small, '--iterations', String(total), '--out', whole]);
     const bin = fileURLToPath(new URL('../../bin/refute', import.meta.url));
-    const child = spawn(process.execPath, [bin, 'hunt', falseClaim, ...small, '--iterations', String(total), '--out', killed], { stdio: 'ignore' });
+    const child = spawn(
+      process.execPath,
+      [bin, 'hunt', falseClaim, ...small, '--iterations', String(total), '--out', killed],
+      { stdio: 'ignore' },
+    );
     const iterationsLogged = (): number =>
-      existsSync(join(killed, 'log.jsonl')) ? (readFileSync(join(killed, 'log.jsonl'), 'utf8').match(/"event":"iteration"/g) ?? []).length : 0;
+      existsSync(join(killed, 'log.jsonl'))
+        ? (readFileSync(join(killed, 'log.jsonl'), 'utf8').match(/"event":"iteration"/g) ?? []).length
+        : 0;
     while (iterationsLogged() < 3) await new Promise((r) => setTimeout(r, 20));
     child.kill('SIGKILL');
     await new Promise((r) => child.on('close', r));
@@ -108,22 +153,30 @@ describe('refute hunt / resume / dump (end to end)', () => {
     expect(at).toBeLessThan(total);
     const r = await runCli(['resume', killed, '--iterations', String(total - at)]);
     expect(r.status).toBe(0);
-    for (const f of ['best.g6', 'counterexamples.g6', 'checkpoint/weights.bin', 'checkpoint/optimizer.bin']) expect(same(whole, killed, f), f).toBe(true);
+    for (const f of ['best.g6', 'counterexamples.g6', 'checkpoint/weights.bin', 'checkpoint/optimizer.bin'])
+      expect(same(whole, killed, f), f).toBe(true);
   });
 
   test('SIGTERM stops a hunt without limits after the iteration in progress, with its checkpoint written', async () => {
     const dir = join(work, 'term');
     const bin = fileURLToPath(new URL('../../bin/refute', import.meta.url));
-    const child = spawn(process.execPath, [bin, 'hunt', falseClaim, ...small, '--out', dir], { stdio: 'ignore' });
-    const logText = (): string => (existsSync(join(dir, 'log.jsonl')) ? readFileSync(join(dir, 'log.jsonl'), 'utf8') : '');
-    while ((logText().match(/"event":"iteration"/g) ?? []).length < 2) await new Promise((r) => setTimeout(r, 20));
+    const child = spawn(process.execPath, [bin, 'hunt', falseClaim, ...small, '--out', dir], {
+      stdio: 'ignore',
+    });
+    const logText = (): string =>
+      existsSync(join(dir, 'log.jsonl')) ? readFileSync(join(dir, 'log.jsonl'), 'utf8') : '';
+    while ((logText().match(/"event":"iteration"/g) ?? []).length < 2)
+      await new Promise((r) => setTimeout(r, 20));
     child.kill('SIGTERM');
     // Never leave a hunt running if the signal is ignored: the test then fails on the status.
     const guard = setTimeout(() => child.kill('SIGKILL'), 20_000);
     const status = await new Promise((r) => child.on('close', r));
     clearTimeout(guard);
     expect(status).toBe(0);
-    const lines = logText().trim().split('\n').map((l) => JSON.parse(l));
+    const lines = logText()
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
     const last = lines[lines.length - 1];
     expect(last.event).toBe('stop');
     expect(last.reason).toBe('signal');

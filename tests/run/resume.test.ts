@@ -22,13 +22,25 @@ beforeAll(async () => {
   target = huntTarget(loaded, selectConjecture(loaded));
 });
 
-const options: RunOptions = { vertices: 7, seed: 'r', batch: 60, elite: 0.1, keep: 0.05, layers: [32, 16, 4], learningRate: 0.003, trainGraphs: 4, explore: true };
+const options: RunOptions = {
+  vertices: 7,
+  seed: 'r',
+  batch: 60,
+  elite: 0.1,
+  keep: 0.05,
+  layers: [32, 16, 4],
+  learningRate: 0.003,
+  trainGraphs: 4,
+  explore: true,
+};
 
 async function run(dir: string, iterations: number, resume: boolean): Promise<void> {
-  const opened = resume ? reopenRun(dir) : (() => {
-    const manifest = createRun(dir, target, options, 'wasm');
-    return { manifest, state: freshState(manifest) };
-  })();
+  const opened = resume
+    ? reopenRun(dir)
+    : (() => {
+        const manifest = createRun(dir, target, options, 'wasm');
+        return { manifest, state: freshState(manifest) };
+      })();
   await driveRun(
     {
       tf,
@@ -53,10 +65,13 @@ describe('resume', () => {
     await run(whole, 6, false);
     await run(split, 3, false);
     await run(split, 3, true);
-    for (const f of files) expect(readFileSync(join(split, f)).equals(readFileSync(join(whole, f))), f).toBe(true);
+    for (const f of files)
+      expect(readFileSync(join(split, f)).equals(readFileSync(join(whole, f))), f).toBe(true);
     // The claim is false and easy, so the comparison covers a non-empty counterexample file.
     expect(readFileSync(join(whole, 'counterexamples.g6'), 'utf8').split('\n').length).toBeGreaterThan(2);
-    expect(readCheckpoint(whole, JSON.parse(readFileSync(join(whole, 'run.json'), 'utf8')).runId).iteration).toBe(6);
+    expect(
+      readCheckpoint(whole, JSON.parse(readFileSync(join(whole, 'run.json'), 'utf8')).runId).iteration,
+    ).toBe(6);
   });
 
   test('reopenRun() refuses a changed conjecture file, naming it', async () => {
@@ -78,7 +93,9 @@ describe('resume', () => {
     const bytes = readFileSync(weights);
     bytes[100] ^= 0xff;
     writeFileSync(weights, bytes);
-    expect(() => readCheckpoint(dir, runId)).toThrow(/corrupt checkpoint \(weights.bin does not match its recorded sha256\)/);
+    expect(() => readCheckpoint(dir, runId)).toThrow(
+      /corrupt checkpoint \(weights.bin does not match its recorded sha256\)/,
+    );
     writeCheckpoint(dir, runId, good);
     writeFileSync(join(dir, 'checkpoint', 'state.json'), '{"format": "refute-checkpoint", "vers');
     expect(() => readCheckpoint(dir, runId)).toThrow(/corrupt checkpoint/);

@@ -1,5 +1,10 @@
 import { describe, expect, test } from 'vitest';
-import { COLLAPSE_DEFAULTS, FRESH_COLLAPSE_STATE, collapseStep, isCollapsed } from '../../src/search/collapse.js';
+import {
+  COLLAPSE_DEFAULTS,
+  FRESH_COLLAPSE_STATE,
+  collapseStep,
+  isCollapsed,
+} from '../../src/search/collapse.js';
 
 const settings = { ...COLLAPSE_DEFAULTS, patience: 3, restartAfter: 2 };
 const collapsedSignals = { distinctFraction: 0.01, meanEntropy: 0.001, improved: false };

@@ -7,7 +7,9 @@ import { componentCount } from '../../src/invariants/components.js';
 import { connectComponentsInPlace } from '../../src/search/connect-repair.js';
 import { pairBitsOfGraph, pairIndex } from '../../src/search/pair-bits.js';
 
-const atlas = readFileSync(new URL('../fixtures/atlas-1-7.g6', import.meta.url), 'utf8').split('\n').filter((l) => l !== '');
+const atlas = readFileSync(new URL('../fixtures/atlas-1-7.g6', import.meta.url), 'utf8')
+  .split('\n')
+  .filter((l) => l !== '');
 
 describe('connectComponentsInPlace', () => {
   test('connectComponentsInPlace() connects every graph on 2..7 vertices with c - 1 new edges and keeps the old ones (networkx atlas)', () => {
@@ -22,13 +24,21 @@ describe('connectComponentsInPlace', () => {
       expect(added).toBe(c - 1);
       expect(h.size).toBe(g.size + c - 1);
       expect(componentCount(h)).toBe(1);
-      for (let v = 1; v < g.order; v++) for (let u = 0; u < v; u++) if (hasEdge(g, u, v)) expect(hasEdge(h, u, v)).toBe(true);
+      for (let v = 1; v < g.order; v++)
+        for (let u = 0; u < v; u++) if (hasEdge(g, u, v)) expect(hasEdge(h, u, v)).toBe(true);
       checked++;
     }
     expect(checked).toBe(1252 - 1); // all 1252 atlas graphs but K1
   });
 
   test('pairIndex() follows graph6 order 01, 02, 12, 03, 13, 23', () => {
-    expect([pairIndex(0, 1), pairIndex(0, 2), pairIndex(1, 2), pairIndex(0, 3), pairIndex(3, 1), pairIndex(2, 3)]).toEqual([0, 1, 2, 3, 4, 5]);
+    expect([
+      pairIndex(0, 1),
+      pairIndex(0, 2),
+      pairIndex(1, 2),
+      pairIndex(0, 3),
+      pairIndex(3, 1),
+      pairIndex(2, 3),
+    ]).toEqual([0, 1, 2, 3, 4, 5]);
   });
 });

@@ -4,7 +4,14 @@ import { decodeGraph6 } from '../../src/graph/graph6.js';
 import { type Graph } from '../../src/graph/graph.js';
 import { InvariantMemo } from '../../src/invariants/registry.js';
 import { judgeCounterexample } from '../../src/search/counterexample.js';
-import { type Evaluation, HUNT_DEFAULTS, type HuntOptions, type HuntState, initialHuntState, runIteration } from '../../src/search/hunt.js';
+import {
+  type Evaluation,
+  HUNT_DEFAULTS,
+  type HuntOptions,
+  type HuntState,
+  initialHuntState,
+  runIteration,
+} from '../../src/search/hunt.js';
 import { localBatchSource } from '../../src/search/local-source.js';
 import { flattenWeights } from '../../src/search/policy.js';
 
@@ -19,7 +26,11 @@ function mantelClaim(g: Graph): Evaluation {
   return { inDomain: true, score: g.size - 15.5 };
 }
 
-async function hunt(o: HuntOptions, iterations: number, evaluate: (g: Graph) => Evaluation): Promise<HuntState> {
+async function hunt(
+  o: HuntOptions,
+  iterations: number,
+  evaluate: (g: Graph) => Evaluation,
+): Promise<HuntState> {
   const source = localBatchSource(tf, o.seed, evaluate);
   let state = initialHuntState(o);
   for (let i = 0; i < iterations && state.counterexamples.length === 0; i++) {
@@ -28,7 +39,14 @@ async function hunt(o: HuntOptions, iterations: number, evaluate: (g: Graph) => 
   return state;
 }
 
-const options: HuntOptions = { ...HUNT_DEFAULTS, seed: '1', order: 8, batch: 200, connected: false, explore: true };
+const options: HuntOptions = {
+  ...HUNT_DEFAULTS,
+  seed: '1',
+  order: 8,
+  batch: 200,
+  connected: false,
+  explore: true,
+};
 
 describe('runIteration', () => {
   test('a small hunt refutes the Mantel-false claim with K_{4,4} (n=8, seed 1, at most 60 iterations)', async () => {
@@ -50,7 +68,9 @@ describe('runIteration', () => {
     const b = await hunt({ ...options, seed: 'twice' }, 4, mantelClaim);
     expect(a.best.map((c) => c.key)).toEqual(b.best.map((c) => c.key));
     expect(a.pool.map((c) => c.key)).toEqual(b.pool.map((c) => c.key));
-    expect(Buffer.from(flattenWeights(a.weights).buffer).equals(Buffer.from(flattenWeights(b.weights).buffer))).toBe(true);
+    expect(
+      Buffer.from(flattenWeights(a.weights).buffer).equals(Buffer.from(flattenWeights(b.weights).buffer)),
+    ).toBe(true);
     const c = await hunt({ ...options, seed: 'other' }, 4, mantelClaim);
     expect(c.best.map((x) => x.key)).not.toEqual(a.best.map((x) => x.key));
   });
@@ -61,8 +81,16 @@ describe('runIteration', () => {
     const state0 = initialHuntState(o);
     state0.weights.biases[state0.weights.biases.length - 1][0] = -2;
     const connectedOnly = (g: Graph): Evaluation =>
-      new InvariantMemo(g).get('isConnected') === true ? { inDomain: true, score: -g.size } : { inDomain: false };
-    const { report } = await runIteration(tf, o, state0, localBatchSource(tf, o.seed, connectedOnly), judgeCounterexample);
+      new InvariantMemo(g).get('isConnected') === true
+        ? { inDomain: true, score: -g.size }
+        : { inDomain: false };
+    const { report } = await runIteration(
+      tf,
+      o,
+      state0,
+      localBatchSource(tf, o.seed, connectedOnly),
+      judgeCounterexample,
+    );
     expect(report.inDomainFraction).toBe(1);
     expect(report.repaired).toBeGreaterThan(50);
   });

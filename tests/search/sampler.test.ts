@@ -22,14 +22,22 @@ describe('FastSampler', () => {
       const rng = iterationRng('sampler-test', 'bias', order);
       for (const b of w.biases) for (let i = 0; i < b.length; i++) b[i] = (rng() - 0.5) * 0.4;
       const sampler = new FastSampler(tf, w);
-      const batch = sampler.sample({ seed: 't', iteration: 0, firstEpisode: 0, count: 40, clamp: 0, recordProbabilities: true });
+      const batch = sampler.sample({
+        seed: 't',
+        iteration: 0,
+        firstEpisode: 0,
+        count: 40,
+        clamp: 0,
+        recordProbabilities: true,
+      });
       sampler.dispose();
       const n = pairCount(order);
       // The reference: the tfjs model itself on the dense 2N inputs of every visited state.
       const model = buildTfjsModel(tf, w);
       const inputs = new Float32Array(40 * n * 2 * n);
       for (let b = 0; b < 40; b++) {
-        for (let i = 0; i < n; i++) inputs.set(policyInput(order, batch.bits.subarray(b * n, (b + 1) * n), i), (b * n + i) * 2 * n);
+        for (let i = 0; i < n; i++)
+          inputs.set(policyInput(order, batch.bits.subarray(b * n, (b + 1) * n), i), (b * n + i) * 2 * n);
       }
       const x = tf.tensor2d(inputs, [40 * n, 2 * n]);
       const y = model.predict(x) as tfTypes.Tensor;
@@ -37,7 +45,8 @@ describe('FastSampler', () => {
       tf.dispose([x, y]);
       model.dispose();
       let worst = 0;
-      for (let k = 0; k < expected.length; k++) worst = Math.max(worst, Math.abs(expected[k] - (batch.probabilities as Float32Array)[k]));
+      for (let k = 0; k < expected.length; k++)
+        worst = Math.max(worst, Math.abs(expected[k] - (batch.probabilities as Float32Array)[k]));
       expect(worst).toBeLessThanOrEqual(1e-5);
     });
   }
@@ -47,7 +56,13 @@ describe('FastSampler', () => {
     const sampler = new FastSampler(tf, w);
     const fast = sampler.sample({ seed: 'same', iteration: 5, firstEpisode: 0, count: 50, clamp: 0.01 });
     sampler.dispose();
-    const plain = sampleWithPredict(tf, w, { seed: 'same', iteration: 5, firstEpisode: 0, count: 50, clamp: 0.01 });
+    const plain = sampleWithPredict(tf, w, {
+      seed: 'same',
+      iteration: 5,
+      firstEpisode: 0,
+      count: 50,
+      clamp: 0.01,
+    });
     // A decision differs only if a uniform draw falls within float32 rounding of p: not expected in 1400 draws.
     expect(Array.from(fast.bits)).toEqual(Array.from(plain));
   });
@@ -61,9 +76,14 @@ describe('FastSampler', () => {
     const b = sampler.sample({ ...req, firstEpisode: 150, count: 151 });
     sampler.dispose();
     expect(Buffer.from(whole.bits).equals(Buffer.concat([a.bits, b.bits]))).toBe(true);
-    expect(Buffer.from((whole.probabilities as Float32Array).buffer).equals(
-      Buffer.concat([Buffer.from((a.probabilities as Float32Array).buffer), Buffer.from((b.probabilities as Float32Array).buffer)]),
-    )).toBe(true);
+    expect(
+      Buffer.from((whole.probabilities as Float32Array).buffer).equals(
+        Buffer.concat([
+          Buffer.from((a.probabilities as Float32Array).buffer),
+          Buffer.from((b.probabilities as Float32Array).buffer),
+        ]),
+      ),
+    ).toBe(true);
     expect(Array.from(whole.entropySums)).toEqual([...a.entropySums, ...b.entropySums]);
   });
 

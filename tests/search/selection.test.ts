@@ -1,7 +1,18 @@
 import { describe, expect, test } from 'vitest';
-import { type Candidate, distinctCount, mergeBest, rankCandidates, takeTop } from '../../src/search/selection.js';
+import {
+  type Candidate,
+  distinctCount,
+  mergeBest,
+  rankCandidates,
+  takeTop,
+} from '../../src/search/selection.js';
 
-const c = (key: string, score: number, inDomain = true): Candidate => ({ bits: new Uint8Array(1), key, inDomain, score: inDomain ? score : -Infinity });
+const c = (key: string, score: number, inDomain = true): Candidate => ({
+  bits: new Uint8Array(1),
+  key,
+  inDomain,
+  score: inDomain ? score : -Infinity,
+});
 
 describe('selection', () => {
   test('rankCandidates() puts in-domain graphs first (even at -Infinity), then higher scores, ties in batch order', () => {

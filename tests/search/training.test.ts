@@ -32,13 +32,22 @@ describe('prefixLogits', () => {
       const graphs = 5;
       const bits = randomBits(graphs * n, rng);
       const params: tfTypes.Tensor[] = [];
-      w.kernels.forEach((k, i) => params.push(tf.tensor2d(k, [k.length / w.biases[i].length, w.biases[i].length]), tf.tensor1d(w.biases[i])));
+      w.kernels.forEach((k, i) =>
+        params.push(
+          tf.tensor2d(k, [k.length / w.biases[i].length, w.biases[i].length]),
+          tf.tensor1d(w.biases[i]),
+        ),
+      );
       const { x, y } = denseTrainingInputs(order, bits);
       const xs = tf.tensor2d(x, [graphs * n, 2 * n]);
       const ys = tf.tensor2d(y, [graphs * n, 1]);
       const bt = tf.tensor2d(Float32Array.from(bits), [graphs, n]);
-      const dense = tf.grads((...p: tfTypes.Tensor[]) => meanCrossEntropy(tf, denseLogits(tf, p, xs), ys))(params);
-      const prefix = tf.grads((...p: tfTypes.Tensor[]) => meanCrossEntropy(tf, prefixLogits(tf, p, bt), ys))(params);
+      const dense = tf.grads((...p: tfTypes.Tensor[]) => meanCrossEntropy(tf, denseLogits(tf, p, xs), ys))(
+        params,
+      );
+      const prefix = tf.grads((...p: tfTypes.Tensor[]) => meanCrossEntropy(tf, prefixLogits(tf, p, bt), ys))(
+        params,
+      );
       for (let k = 0; k < params.length; k++) {
         const a = dense[k].dataSync();
         const b = prefix[k].dataSync();
@@ -60,7 +69,15 @@ describe('trainEpoch', () => {
     const w = initialWeights({ order, hidden: [8, 4] }, iterationRng('adam', 'init', 0));
     const bits = randomBits(pairCount(order), iterationRng('adam', 'bits', 0), 0.5);
     const lr = 0.01;
-    const r = trainEpoch(tf, w, freshOptimizerState(parameterCount(w.shape)), bits, { ...ADAM_DEFAULTS, learningRate: lr }, 8, iterationRng('adam', 'order', 0));
+    const r = trainEpoch(
+      tf,
+      w,
+      freshOptimizerState(parameterCount(w.shape)),
+      bits,
+      { ...ADAM_DEFAULTS, learningRate: lr },
+      8,
+      iterationRng('adam', 'order', 0),
+    );
     const before = flattenWeights(w);
     const after = flattenWeights(r.weights);
     const m = r.optimizer.firstMoment;
@@ -68,7 +85,8 @@ describe('trainEpoch', () => {
     for (let i = 0; i < before.length; i++) {
       const g = m[i] / (1 - ADAM_DEFAULTS.beta1);
       if (Math.abs(g) < 1e-4) continue;
-      const expected = (lr * Math.abs(g)) / (Math.abs(g) + ADAM_DEFAULTS.epsilon / Math.sqrt(1 - ADAM_DEFAULTS.beta2));
+      const expected =
+        (lr * Math.abs(g)) / (Math.abs(g) + ADAM_DEFAULTS.epsilon / Math.sqrt(1 - ADAM_DEFAULTS.beta2));
       expect(Math.abs(after[i] - before[i])).toBeCloseTo(expected, 6);
       expect(Math.sign(after[i] - before[i])).toBe(-Math.sign(g));
       checked++;
@@ -85,11 +103,27 @@ describe('trainEpoch', () => {
     const one = randomBits(pairCount(order), iterationRng('fit', 'bits', 0));
     const bits = new Uint8Array(3 * one.length);
     for (let k = 0; k < 3; k++) bits.set(one, k * one.length);
-    const first = trainEpoch(tf, w, opt, bits, { ...ADAM_DEFAULTS, learningRate: 0.01 }, 1, iterationRng('fit', 'o', 0));
+    const first = trainEpoch(
+      tf,
+      w,
+      opt,
+      bits,
+      { ...ADAM_DEFAULTS, learningRate: 0.01 },
+      1,
+      iterationRng('fit', 'o', 0),
+    );
     let last = first.meanLoss;
     ({ weights: w, optimizer: opt } = first);
     for (let e = 1; e < 150; e++) {
-      const r = trainEpoch(tf, w, opt, bits, { ...ADAM_DEFAULTS, learningRate: 0.01 }, 1, iterationRng('fit', 'o', e));
+      const r = trainEpoch(
+        tf,
+        w,
+        opt,
+        bits,
+        { ...ADAM_DEFAULTS, learningRate: 0.01 },
+        1,
+        iterationRng('fit', 'o', e),
+      );
       ({ weights: w, optimizer: opt } = r);
       last = r.meanLoss;
     }
@@ -106,7 +140,9 @@ describe('trainEpoch', () => {
     const bits = randomBits(4 * pairCount(order), iterationRng('pure', 'bits', 0));
     const a = trainEpoch(tf, w, opt, bits, ADAM_DEFAULTS, 2, iterationRng('pure', 'o', 0));
     const b = trainEpoch(tf, w, opt, bits, ADAM_DEFAULTS, 2, iterationRng('pure', 'o', 0));
-    expect(Buffer.from(flattenWeights(a.weights).buffer).equals(Buffer.from(flattenWeights(b.weights).buffer))).toBe(true);
+    expect(
+      Buffer.from(flattenWeights(a.weights).buffer).equals(Buffer.from(flattenWeights(b.weights).buffer)),
+    ).toBe(true);
     expect(Buffer.from(flattenWeights(w).buffer).equals(Buffer.from(copy.buffer))).toBe(true);
     expect(opt.step).toBe(0);
   });
