@@ -1,7 +1,7 @@
 /**
  * `refute draw G6 --out FILE.svg|FILE.png [--layout ...] [--colour ...] [--seed S]
- * [--conjecture FILE [--name NAME]]`: a drawing of one graph; with a conjecture, the caption
- * adds its score.
+ * [--file FILE [--conjecture NAME]]`: a drawing of one graph; with a conjecture file, the
+ * caption adds its score.
  */
 import { type Command } from 'commander';
 import { InputError } from '../errors.js';
@@ -24,8 +24,8 @@ interface DrawOptions {
   layout: string;
   colour: string;
   seed: string;
+  file?: string;
   conjecture?: string;
-  name?: string;
 }
 
 function oneOf<T extends string>(option: string, value: string, allowed: ReadonlyArray<T>): T {
@@ -48,8 +48,8 @@ export function addDrawCommand(program: Command, outcome: CommandOutcome): void 
     )
     .option('--colour <by>', `colour vertices by ${COLOURINGS.join(', ')}`, 'none')
     .option('--seed <seed>', 'seed of the force-directed layout', 'refute')
-    .option('--conjecture <file>', 'add this conjecture’s score to the caption')
-    .option('--name <name>', 'which conjecture of the file (when it exports several)')
+    .option('--file <conjecture-file>', 'add the score of this conjecture file to the caption')
+    .option('--conjecture <name>', 'which conjecture of the file, when it exports several')
     .action(async (graph6: string, opts: DrawOptions) => {
       const layout = oneOf('--layout', opts.layout, LAYOUTS);
       const colourBy = oneOf('--colour', opts.colour, COLOURINGS);
@@ -60,8 +60,11 @@ export function addDrawCommand(program: Command, outcome: CommandOutcome): void 
         throw new InputError('--layout tree: the graph has a cycle; use auto, force or circle');
       }
       const caption: string[] = [];
-      if (opts.conjecture !== undefined) {
-        const conjecture = selectConjecture(await loadConjectureFile(opts.conjecture), opts.name);
+      if (opts.conjecture !== undefined && opts.file === undefined) {
+        throw new InputError('--conjecture names a conjecture of a file: give the file with --file');
+      }
+      if (opts.file !== undefined) {
+        const conjecture = selectConjecture(await loadConjectureFile(opts.file), opts.conjecture);
         const result = evaluateConjecture(conjecture, g);
         caption.push(
           result.inDomain

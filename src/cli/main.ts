@@ -10,6 +10,7 @@ import { addHuntCommand } from './hunt.js';
 import { addResumeCommand } from './resume.js';
 import { addDumpCommand } from './dump.js';
 import { addDrawCommand } from './draw.js';
+import { addReportCommand } from './report.js';
 import { TOOL_VERSION } from '../version.js';
 
 /** What a command's action returns: the process's exit status. */
@@ -34,6 +35,7 @@ export function buildProgram(outcome: CommandOutcome): Command {
   addResumeCommand(program, outcome);
   addDumpCommand(program, outcome);
   addDrawCommand(program, outcome);
+  addReportCommand(program, outcome);
   return program;
 }
 
