@@ -63,6 +63,16 @@ describe('runIteration', () => {
     expect(state.counterexamples[0].certification).toBe('numerical');
   });
 
+  test('runIteration() leaves no tfjs tensors behind (an overnight run must not grow)', async () => {
+    const source = localBatchSource(tf, 'leak', mantelClaim);
+    let state = initialHuntState({ ...options, seed: 'leak' });
+    state = (await runIteration(tf, options, state, source, judgeCounterexample)).state;
+    const before = tf.memory().numTensors;
+    for (let i = 0; i < 3; i++)
+      state = (await runIteration(tf, options, state, source, judgeCounterexample)).state;
+    expect(tf.memory().numTensors).toBe(before);
+  });
+
   test('runIteration() is deterministic: the same seed twice gives the same pool, best list and weights', async () => {
     const a = await hunt({ ...options, seed: 'twice' }, 4, mantelClaim);
     const b = await hunt({ ...options, seed: 'twice' }, 4, mantelClaim);
