@@ -43,16 +43,16 @@ export function progressLine(
   const ms = r.timings.generate + r.timings.score + r.timings.select + r.timings.train;
   const rate = ms > 0 ? Math.round((batch * 1000) / ms) : 0;
   let left = '';
-  if (stop.minutes !== undefined) left = `  ${clock(Math.max(0, stop.minutes * 60_000 - elapsedMs))} left`;
+  if (stop.minutes !== undefined) left = ` (${clock(Math.max(0, stop.minutes * 60_000 - elapsedMs))} left)`;
   else if (stop.iterations !== undefined && ran > 0)
-    left = `  ~${clock(((stop.iterations - ran) * elapsedMs) / ran)} left`;
+    left = ` (~${clock(((stop.iterations - ran) * elapsedMs) / ran)} left)`;
   const collapse = r.collapsed ? '  COLLAPSED' : '';
   const event = r.action === 'none' ? '' : `  ${r.action.toUpperCase()}`;
   return (
     `it ${r.iteration}  best ${formatNumber(r.best)}  elite ${formatNumber(Number(r.eliteMean.toPrecision(4)))}` +
-    `  ${rate} graphs/s  distinct ${Math.round(r.distinctFraction * 100)}%  H ${r.meanEntropy.toFixed(3)}` +
-    `  restarts ${state.collapse.restarts} perturb ${state.collapse.perturbations}${collapse}${event}` +
-    `  found ${state.counterexamples.length}  ${clock(elapsedMs)}${left}`
+    `  ${rate} graphs/s  ${clock(elapsedMs)}${left}  found ${state.counterexamples.length}` +
+    `  distinct ${Math.round(r.distinctFraction * 100)}%  H ${r.meanEntropy.toFixed(2)}` +
+    `  perturb ${state.collapse.perturbations} restart ${state.collapse.restarts}${collapse}${event}`
   );
 }
 
