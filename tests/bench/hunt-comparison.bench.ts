@@ -7,14 +7,18 @@
  * Claims (scenarios of our own; the counterexamples are known independently):
  *  - mantel-10: "a triangle-free graph on 10 vertices has at most 24 edges"; false by Mantel's
  *    theorem (W. Mantel, Wiskundige Opgaven 10 (1907) 60-61): K_{5,5} has 25.
- *  - mantel-9: the same on 9 vertices with 19 edges; K_{4,5} has 20.
+ *  - mantel-12: the same on 12 vertices with 35 edges; K_{6,6} has 36.
  *  - star-radius-12: "a connected graph on 12 vertices has spectral radius <= average degree + 1";
  *    the star K_{1,11} has sqrt(11) = 3.317 > 2 * 11 / 12 + 1 = 2.833.
+ *  - lambda2-matching-13 (only when the registry has matchingNumber): "a connected graph has
+ *    second largest eigenvalue <= matching number" on 13 vertices; refuted by two stars K_{1,5}
+ *    whose centres are joined through a middle vertex (lambda2 = sqrt 5 > 2 = matching number;
+ *    the argument is in scores/second-eigenvalue-vs-matching.ts).
  * Environment: BENCH_SEEDS (default 3), BENCH_ITERATIONS (budget per run, default 200), BENCH_BATCH (default 500).
  */
 import { startTensorflow, tf } from '../../src/search/backend.js';
 import { type Graph } from '../../src/graph/graph.js';
-import { InvariantMemo } from '../../src/invariants/registry.js';
+import { INVARIANTS, InvariantMemo } from '../../src/invariants/registry.js';
 import { judgeCounterexample } from '../../src/search/counterexample.js';
 import {
   type Evaluation,
@@ -43,8 +47,8 @@ const mantel = (order: number): Claim => ({
 });
 
 const CLAIMS: Claim[] = [
-  mantel(9),
   mantel(10),
+  mantel(12),
   {
     name: 'star-radius-12',
     order: 12,
@@ -56,6 +60,21 @@ const CLAIMS: Claim[] = [
     },
   },
 ];
+if (INVARIANTS.has('matchingNumber')) {
+  CLAIMS.push({
+    name: 'lambda2-matching-13',
+    order: 13,
+    connected: true,
+    evaluate: (g) => {
+      const memo = new InvariantMemo(g);
+      if (memo.get('isConnected') !== true) return { inDomain: false };
+      return {
+        inDomain: true,
+        score: (memo.get('secondLargestEigenvalue') as number) - (memo.get('matchingNumber') as number),
+      };
+    },
+  });
+}
 
 async function firstFound(
   claim: Claim,
