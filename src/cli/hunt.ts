@@ -11,7 +11,6 @@ import { loadConjectureFile, selectConjecture } from '../conjecture/load.js';
 import { evaluateConjecture } from '../conjecture/evaluate.js';
 import { type Conjecture } from '../conjecture/types.js';
 import { type LoadedConjectureFile } from '../conjecture/load.js';
-import { startTensorflow, tf } from '../search/backend.js';
 import { judgeCounterexample } from '../search/counterexample.js';
 import { HUNT_DEFAULTS } from '../search/hunt.js';
 import { type HuntTarget, type StopConditions, createRun, freshState } from '../run/hunt-run.js';
@@ -133,6 +132,8 @@ export function addHuntCommand(program: Command, outcome: CommandOutcome): void 
         explore: flags.plain !== true,
       };
       const target = huntTarget(loaded, conjecture);
+      // tfjs is loaded only by the commands that need it: it costs about a second of start-up.
+      const { startTensorflow, tf } = await import('../search/backend.js');
       const backend = await startTensorflow(1);
       const dir = flags.out ?? join('runs', runName(conjecture.name, seed));
       const manifest = createRun(dir, target, options, backend);

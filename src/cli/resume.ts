@@ -5,7 +5,6 @@
  */
 import { type Command } from 'commander';
 import { loadConjectureFile, selectConjecture } from '../conjecture/load.js';
-import { startTensorflow, tf } from '../search/backend.js';
 import { reopenRun } from '../run/hunt-run.js';
 import { type CommandOutcome } from './main.js';
 import { runSession } from './hunt-session.js';
@@ -33,6 +32,7 @@ export function addResumeCommand(program: Command, outcome: CommandOutcome): voi
       const { manifest, state } = reopenRun(dir);
       const loaded = await loadConjectureFile(manifest.conjecture.path);
       const target = huntTarget(loaded, selectConjecture(loaded, manifest.conjecture.name));
+      const { startTensorflow, tf } = await import('../search/backend.js');
       await startTensorflow(1);
       const { status } = await runSession({ tf, dir, manifest, target, state, stop, threads, resumed: true });
       outcome.status = status;

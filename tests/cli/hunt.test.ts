@@ -93,7 +93,7 @@ describe('refute hunt / resume / dump (end to end)', () => {
   test('--threads 2 gives the same files as --threads 1', async () => {
     const one = join(work, 't1');
     const two = join(work, 't2');
-    await runCli(['hunt', falseClaim, ...small, '--iterations', '3', '--out', one, '--threads', '1']);
+    await runCli(['hunt', falseClaim, ...small, '--iterations', '2', '--out', one, '--threads', '1']);
     const r = await runCli([
       'hunt',
       falseClaim,
@@ -133,7 +133,7 @@ describe('refute hunt / resume / dump (end to end)', () => {
   test('a hunt killed with SIGKILL resumes from its last checkpoint and ends as an uninterrupted run', async () => {
     const whole = join(work, 'k-whole');
     const killed = join(work, 'k-killed');
-    const total = 10;
+    const total = 8;
     await runCli(['hunt', falseClaim, ...small, '--iterations', String(total), '--out', whole]);
     const bin = fileURLToPath(new URL('../../bin/refute', import.meta.url));
     const child = spawn(
