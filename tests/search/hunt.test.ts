@@ -61,6 +61,8 @@ describe('runIteration', () => {
     expect(memo.get('isBipartite')).toBe(true);
     expect(Array.from(g.degrees)).toEqual([4, 4, 4, 4, 4, 4, 4, 4]);
     expect(state.counterexamples[0].certification).toBe('numerical');
+    // Nothing outside the domain is ever reported: every best-list graph is triangle-free.
+    for (const c of state.best) expect(new InvariantMemo(decodeGraph6(c.key)).get('triangleCount')).toBe(0);
   });
 
   test('runIteration() leaves no tfjs tensors behind (an overnight run must not grow)', async () => {
