@@ -5,7 +5,8 @@
  * batch is the same near miss, and the elite it trains on is that graph again. We watch two
  * signals each iteration: the fraction of distinct graphs among the batch's fresh samples and the
  * policy's mean decision entropy. When either is below its floor and the best score has not
- * improved for `patience` iterations, the policy is perturbed (Gaussian noise on the kernels,
+ * improved for `patience` iterations (or, collapsed or not, for `stallPatience` iterations),
+ * the policy is perturbed (Gaussian noise on the kernels,
  * Adam's moments reset); after `restartAfter` perturbations without improvement it is restarted
  * from fresh weights. The carried-over pool is kept either way, so what was found is not lost
  * and the restarted policy is trained on it at once. (The same escalation from small to large
@@ -20,6 +21,11 @@ export interface CollapseSettings {
   readonly minEntropy: number;
   /** Iterations without improvement of the best score, while collapsed, before acting. */
   readonly patience: number;
+  /**
+   * Iterations without improvement before acting even when not collapsed: a policy that keeps
+   * sampling variations of one local optimum (diverse enough to pass both floors) is stuck too.
+   */
+  readonly stallPatience: number;
   /** Noise scale of a perturbation, relative to each layer's Glorot limit. */
   readonly perturbScale: number;
   /** Perturbations without improvement before a restart. */
@@ -30,6 +36,7 @@ export const COLLAPSE_DEFAULTS: CollapseSettings = {
   minDistinctFraction: 0.2,
   minEntropy: 0.05,
   patience: 10,
+  stallPatience: 40,
   perturbScale: 0.5,
   restartAfter: 3,
 };
@@ -79,7 +86,8 @@ export function collapseStep(
     };
   }
   const stale = state.staleIterations + 1;
-  if (!collapsed || stale < settings.patience) {
+  const due = (collapsed && stale >= settings.patience) || stale >= settings.stallPatience;
+  if (!due) {
     return { state: { ...state, staleIterations: stale }, action: 'none', collapsed };
   }
   if (state.perturbationsSinceImprovement + 1 >= settings.restartAfter) {

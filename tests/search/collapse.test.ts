@@ -6,7 +6,7 @@ import {
   isCollapsed,
 } from '../../src/search/collapse.js';
 
-const settings = { ...COLLAPSE_DEFAULTS, patience: 3, restartAfter: 2 };
+const settings = { ...COLLAPSE_DEFAULTS, patience: 3, stallPatience: 5, restartAfter: 2 };
 const collapsedSignals = { distinctFraction: 0.01, meanEntropy: 0.001, improved: false };
 
 describe('collapseStep', () => {
@@ -27,6 +27,18 @@ describe('collapseStep', () => {
     expect(actions).toEqual(['none', 'none', 'perturb', 'none', 'none', 'restart']);
     expect(state.perturbations).toBe(1);
     expect(state.restarts).toBe(1);
+  });
+
+  test('collapseStep() acts on a long stall even when the batch is diverse', () => {
+    let state = FRESH_COLLAPSE_STATE;
+    const actions: string[] = [];
+    for (let i = 0; i < 5; i++) {
+      const r = collapseStep(state, { distinctFraction: 0.9, meanEntropy: 0.5, improved: false }, settings);
+      expect(r.collapsed).toBe(false);
+      actions.push(r.action);
+      state = r.state;
+    }
+    expect(actions).toEqual(['none', 'none', 'none', 'none', 'perturb']);
   });
 
   test('collapseStep() does nothing while the best score improves, and resets its counters', () => {
