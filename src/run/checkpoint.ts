@@ -190,7 +190,7 @@ function readFrom(folder: string, runId: string): HuntState {
         score: decodeScore(c.score),
         certification: c.certification === 'certified' ? 'certified' : 'numerical',
       })),
-      collapse: { ...stored.collapse },
+      collapse: { ...stored.collapse, freshOnly: stored.collapse.freshOnly ?? 0 },
     };
   } catch {
     throw corrupt(folder, 'state.json has malformed fields');

@@ -49,6 +49,12 @@ export interface CollapseState {
   /** Totals over the run, for the log and the progress line. */
   readonly perturbations: number;
   readonly restarts: number;
+  /**
+   * Iterations left in which the elite is chosen among fresh samples only (the carried pool is
+   * still kept and ranked for the pool and best list). Set after a perturbation or restart: a
+   * pool-dominated elite would teach the new policy the old optimum again at once.
+   */
+  readonly freshOnly: number;
 }
 
 export const FRESH_COLLAPSE_STATE: CollapseState = {
@@ -56,6 +62,7 @@ export const FRESH_COLLAPSE_STATE: CollapseState = {
   perturbationsSinceImprovement: 0,
   perturbations: 0,
   restarts: 0,
+  freshOnly: 0,
 };
 
 export type CollapseAction = 'none' | 'perturb' | 'restart';
@@ -78,9 +85,10 @@ export function collapseStep(
   settings: CollapseSettings,
 ): { state: CollapseState; action: CollapseAction; collapsed: boolean } {
   const collapsed = isCollapsed(signals, settings);
+  const freshOnly = Math.max(0, state.freshOnly - 1);
   if (signals.improved) {
     return {
-      state: { ...state, staleIterations: 0, perturbationsSinceImprovement: 0 },
+      state: { ...state, staleIterations: 0, perturbationsSinceImprovement: 0, freshOnly },
       action: 'none',
       collapsed,
     };
@@ -88,7 +96,7 @@ export function collapseStep(
   const stale = state.staleIterations + 1;
   const due = (collapsed && stale >= settings.patience) || stale >= settings.stallPatience;
   if (!due) {
-    return { state: { ...state, staleIterations: stale }, action: 'none', collapsed };
+    return { state: { ...state, staleIterations: stale, freshOnly }, action: 'none', collapsed };
   }
   if (state.perturbationsSinceImprovement + 1 >= settings.restartAfter) {
     return {
@@ -97,6 +105,7 @@ export function collapseStep(
         perturbationsSinceImprovement: 0,
         perturbations: state.perturbations,
         restarts: state.restarts + 1,
+        freshOnly: settings.patience,
       },
       action: 'restart',
       collapsed,
@@ -108,6 +117,7 @@ export function collapseStep(
       perturbationsSinceImprovement: state.perturbationsSinceImprovement + 1,
       perturbations: state.perturbations + 1,
       restarts: state.restarts,
+      freshOnly: settings.patience,
     },
     action: 'perturb',
     collapsed,

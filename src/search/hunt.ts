@@ -193,7 +193,9 @@ export async function runIteration(
   const ranked = rankCandidates([...state.pool, ...fresh]);
   const eliteCount = Math.max(1, Math.round(o.elite * o.batch));
   const keepCount = Math.round(o.keep * o.batch);
-  const elite = takeTop(ranked, eliteCount, o.explore);
+  // Right after a perturbation or restart the elite comes from fresh samples only (collapse.ts).
+  const eliteFrom = o.explore && state.collapse.freshOnly > 0 ? rankCandidates(fresh) : ranked;
+  const elite = takeTop(eliteFrom, eliteCount, o.explore);
   const pool = takeTop(ranked, keepCount, o.explore);
   const previousBest = state.best.length > 0 ? state.best[0].score : -Infinity;
   const best = mergeBest(state.best, ranked, o.bestCapacity);
