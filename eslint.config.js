@@ -2,6 +2,7 @@
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import prettier from 'eslint-config-prettier';
+import globals from 'globals';
 
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', 'runs/**', 'tests/fixtures/**'] },
@@ -15,6 +16,6 @@ export default tseslint.config(
   },
   {
     files: ['bin/**', '**/*.js', '**/*.mjs'],
-    languageOptions: { globals: { process: 'readonly', console: 'readonly' } },
+    languageOptions: { globals: globals.node },
   },
 );

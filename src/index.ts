@@ -24,6 +24,15 @@ export {
   type InvariantDefinition,
 } from './invariants/registry.js';
 export { InputError, InvariantDomainError } from './errors.js';
+export {
+  canonicalLabelling,
+  canonicalForm,
+  canonicalGraph6,
+  canonicalSearch,
+  CanonicalLabellingLimitError,
+  type CanonicalSearchResult,
+  type CanonicalSearchOptions,
+} from './graph/canonical.js';
 export { defineConjecture } from './conjecture/define.js';
 export type {
   Conjecture,

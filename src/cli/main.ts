@@ -6,6 +6,9 @@
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
+import { addCheckCommand } from './check.js';
+import { addGenerateCommand } from './generate.js';
+import { addSweepCommand } from './sweep.js';
 import { addHuntCommand } from './hunt.js';
 import { addResumeCommand } from './resume.js';
 import { addDumpCommand } from './dump.js';
@@ -31,6 +34,9 @@ export function buildProgram(outcome: CommandOutcome): Command {
     .exitOverride()
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   addInvariantsCommand(program, outcome);
+  addCheckCommand(program, outcome);
+  addGenerateCommand(program, outcome);
+  addSweepCommand(program, outcome);
   addHuntCommand(program, outcome);
   addResumeCommand(program, outcome);
   addDumpCommand(program, outcome);

@@ -61,8 +61,12 @@ export class ScoreEvaluationError extends InputError {
     readonly part: 'score' | 'where',
     readonly graph6: string,
     readonly problem: string,
+    /** What to do about it, when there is something to suggest. */
+    hint?: string,
   ) {
-    super(`conjecture '${conjecture}': ${part} ${problem} on graph '${graph6}' (graph6)`);
+    super(
+      `conjecture '${conjecture}': ${part} ${problem} on graph '${graph6}' (graph6)${hint === undefined ? '' : `; ${hint}`}`,
+    );
     this.name = 'ScoreEvaluationError';
   }
 }

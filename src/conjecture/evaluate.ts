@@ -7,7 +7,7 @@
  */
 import { type Graph } from '../graph/graph.js';
 import { encodeGraph6 } from '../graph/graph6.js';
-import { InputError } from '../errors.js';
+import { InputError, InvariantDomainError } from '../errors.js';
 import { ScoreEvaluationError, UnknownInvariantError } from './errors.js';
 import { locateError } from './source-locations.js';
 import { type Conjecture, type Evaluation, type GraphView } from './types.js';
@@ -15,7 +15,13 @@ import { createGraphView, createTracingGraphView } from './view.js';
 
 const OUTSIDE: Evaluation = Object.freeze({ inDomain: false });
 
-/** An evaluation together with the invariants `where` and `score` read ("complement.x" for the complement's). */
+const DOMAIN_HINT =
+  "restrict the conjecture's domain (connected: true, or where) to graphs where the score is defined";
+
+/**
+ * An evaluation together with the invariants read on the way: by `where` and `score`
+ * ("complement.x" for the complement's), and isConnected when the conjecture asks for connected graphs.
+ */
 export type TracedEvaluation = Evaluation & { readonly used: readonly string[] };
 
 function describeValue(x: unknown): string {
@@ -37,7 +43,8 @@ function failure(c: Conjecture, g: Graph, part: 'score' | 'where', err: unknown)
     return new InputError(`conjecture '${c.name}': ${part}${atText}: ${err.message}`);
   const what =
     err instanceof Error ? `${err.name === 'Error' ? '' : err.name + ': '}${err.message}` : String(err);
-  return new ScoreEvaluationError(c.name, part, encodeGraph6(g), `threw ${what}${atText}`);
+  const hint = err instanceof InvariantDomainError ? DOMAIN_HINT : undefined;
+  return new ScoreEvaluationError(c.name, part, encodeGraph6(g), `threw ${what}${atText}`, hint);
 }
 
 /** Evaluates c on an existing view (of graph g). */
@@ -82,7 +89,8 @@ export function evaluateOnView(c: Conjecture, g: Graph, view: GraphView): Evalua
       c.name,
       'score',
       encodeGraph6(g),
-      'returned NaN (often 0/0, Infinity - Infinity or 0 * Infinity; restrict the domain with connected or where)',
+      'returned NaN',
+      `NaN often comes from 0/0, Infinity - Infinity or 0 * Infinity; ${DOMAIN_HINT}`,
     );
   }
   return { inDomain: true, score };

@@ -18,9 +18,9 @@ import { readFile } from 'node:fs/promises';
 import { createHash } from 'node:crypto';
 import { createRequire, SourceMap } from 'node:module';
 import path from 'node:path';
-import { pathToFileURL } from 'node:url';
+import { fileURLToPath, pathToFileURL } from 'node:url';
 import vm from 'node:vm';
-import { build, type Message } from 'esbuild';
+import type { Message } from 'esbuild';
 import { ConjectureFieldError, ConjectureFileError } from './errors.js';
 import { validateConjecture } from './define.js';
 import { registerLocator } from './source-locations.js';
@@ -80,6 +80,9 @@ async function bundle(source: string, absolute: string, shown: string): Promise<
     throw new ConjectureFileError(shown, 'a conjecture file must end in .ts (or .mts, .js, .mjs)');
   }
   const dir = path.dirname(absolute);
+  // Imported here, not at the top: esbuild's module costs ~0.1 s, which commands that load no
+  // conjecture file (invariants, draw, --help) should not pay.
+  const { build } = await import('esbuild');
   try {
     const result = await build({
       stdin: { contents: source, loader, resolveDir: dir, sourcefile: absolute },
@@ -113,24 +116,38 @@ async function bundle(source: string, absolute: string, shown: string): Promise<
   }
 }
 
-/** The first stack frame in the bundle, mapped back to file:line:column of the original source. */
-function originalLocation(err: unknown, bundleName: string, b: Bundle, shown: string): string | undefined {
+/**
+ * file:line:column in the original sources of the first stack frame of err inside the bundle,
+ * through the bundle's source map (whose sources are relative to the file's folder).
+ */
+function originalLocation(
+  err: unknown,
+  bundleName: string,
+  b: Bundle,
+  absolute: string,
+  shown: string,
+): string | undefined {
   if (b.map === undefined || !(err instanceof Error) || typeof err.stack !== 'string') return undefined;
   for (const line of err.stack.split('\n')) {
     const at = line.indexOf(bundleName + ':');
     if (at < 0) continue;
-    const m = /:(\d+):(\d+)\)?\s*$/.exec(line.slice(at + bundleName.length));
+    const m = /^:(\d+):(\d+)/.exec(line.slice(at + bundleName.length));
     if (m === null) continue;
     const entry = b.map.findEntry(Number(m[1]) - 1, Number(m[2]) - 1) as {
       originalSource?: string;
       originalLine?: number;
       originalColumn?: number;
     };
-    if (entry.originalLine === undefined || entry.originalColumn === undefined) continue;
-    const source = entry.originalSource ?? '';
-    const file = source.startsWith('file:') ? new URL(source).pathname : source;
-    const isMain = file === '' || file.endsWith(path.basename(bundleName.replace(/ \(bundled\)$/, '')));
-    return `${isMain ? shown : displayPath(file)}:${entry.originalLine + 1}:${entry.originalColumn + 1}`;
+    if (
+      entry.originalSource === undefined ||
+      entry.originalLine === undefined ||
+      entry.originalColumn === undefined
+    )
+      continue;
+    const source = entry.originalSource.startsWith('file:')
+      ? fileURLToPath(entry.originalSource)
+      : path.resolve(path.dirname(absolute), entry.originalSource);
+    return `${source === absolute ? shown : displayPath(source)}:${entry.originalLine + 1}:${entry.originalColumn + 1}`;
   }
   return undefined;
 }
@@ -154,7 +171,7 @@ async function run(
     wrapper(module, module.exports, requireForFile, absolute, path.dirname(absolute));
   } catch (err) {
     if (err instanceof ConjectureFieldError) throw new ConjectureFileError(shown, err.message);
-    const where = originalLocation(err, bundleName, b, shown) ?? shown;
+    const where = originalLocation(err, bundleName, b, absolute, shown) ?? shown;
     const what = err instanceof Error ? `${err.name}: ${err.message}` : String(err);
     throw new InputError(`${where}: error while loading the conjecture file: ${what}`);
   }
@@ -214,7 +231,7 @@ export async function loadConjectureFile(file: string): Promise<LoadedConjecture
   const bundleName = `${absolute} (bundled)`;
   const exports = await run(b, absolute, shown, bundleName);
   const conjectures = conjecturesOf(exports, shown);
-  const locate = (err: unknown): string | undefined => originalLocation(err, bundleName, b, shown);
+  const locate = (err: unknown): string | undefined => originalLocation(err, bundleName, b, absolute, shown);
   for (const c of conjectures) {
     registerLocator(c.score, locate);
     if (c.where !== undefined) registerLocator(c.where, locate);

@@ -14,6 +14,15 @@ import { DISTANCE_INVARIANTS } from './distances.js';
 import { SPECTRAL_INVARIANTS } from './spectra.js';
 import { TRIANGLE_INVARIANTS } from './triangles.js';
 import { DEGREE_INDEX_INVARIANTS } from './degree-indices.js';
+import { DISTANCE_SPECTRAL_INVARIANTS } from './distance-spectra.js';
+import { MATCHING_INVARIANTS } from './matching.js';
+import { INDEPENDENCE_INVARIANTS, VERTEX_COVER_INVARIANTS } from './independence.js';
+import { CLIQUE_INVARIANTS } from './cliques.js';
+import { COLOURING_INVARIANTS } from './colouring.js';
+import { DOMINATION_INVARIANTS } from './domination.js';
+import { CONNECTIVITY_INVARIANTS } from './connectivity.js';
+import { SPANNING_TREE_INVARIANTS } from './spanning-trees.js';
+import { CUT_STRUCTURE_INVARIANTS } from './cut-structure.js';
 
 /** What sort of value an invariant has; decides JSON encoding, printing and certification. */
 export type InvariantKind = 'integer' | 'real' | 'boolean' | 'integer-list' | 'real-list';
@@ -69,7 +78,17 @@ const DEFINITIONS: ReadonlyArray<InvariantDefinition> = [
   ...COMPONENT_INVARIANTS,
   ...DISTANCE_INVARIANTS,
   ...SPECTRAL_INVARIANTS,
+  ...DISTANCE_SPECTRAL_INVARIANTS,
+  ...MATCHING_INVARIANTS,
+  ...INDEPENDENCE_INVARIANTS,
+  ...CLIQUE_INVARIANTS,
+  ...COLOURING_INVARIANTS,
+  ...DOMINATION_INVARIANTS,
+  ...VERTEX_COVER_INVARIANTS,
+  ...CONNECTIVITY_INVARIANTS,
   ...TRIANGLE_INVARIANTS,
+  ...SPANNING_TREE_INVARIANTS,
+  ...CUT_STRUCTURE_INVARIANTS,
   ...DEGREE_INDEX_INVARIANTS,
 ];
 
