@@ -19,7 +19,8 @@ import {
   collapseStep,
 } from './collapse.js';
 import { connectComponentsInPlace } from './connect-repair.js';
-import { graphKey } from './graph-key.js';
+import { lazyKey } from './graph-key.js';
+import { encodeGraph6 } from '../graph/graph6.js';
 import {
   type PolicyShape,
   type PolicyWeights,
@@ -30,7 +31,7 @@ import {
 } from './policy.js';
 import { iterationRng } from './random.js';
 import { type SampledBatch } from './sampler.js';
-import { type Candidate, distinctCount, mergeBest, rankCandidates, takeTop } from './selection.js';
+import { type Candidate, mergeBest, rankCandidates, takeTop } from './selection.js';
 import { ADAM_DEFAULTS, type OptimizerState, freshOptimizerState, trainEpoch } from './training.js';
 
 /** The result of evaluating a conjecture on one graph (same shape as the conjecture module's). */
@@ -173,6 +174,7 @@ export async function runIteration(
   const evaluations = await source.evaluate(o.order, bits, o.batch);
   const fresh: Candidate[] = [];
   const freshGraphs: Graph[] = [];
+  const labelled = new Set<string>();
   let inDomain = 0;
   for (let b = 0; b < o.batch; b++) {
     const own = bits.slice(b * n, (b + 1) * n);
@@ -180,9 +182,13 @@ export async function runIteration(
     const e = evaluations[b];
     if (e.inDomain) inDomain++;
     freshGraphs.push(g);
+    labelled.add(encodeGraph6(g));
+    const key = lazyKey(g);
     fresh.push({
       bits: own,
-      key: graphKey(g),
+      get key() {
+        return key();
+      },
       inDomain: e.inDomain,
       score: e.inDomain ? e.score : -Infinity,
     });
@@ -205,13 +211,13 @@ export async function runIteration(
   const newCounterexamples: CounterexampleRecord[] = [];
   for (let b = 0; b < o.batch; b++) {
     const c = fresh[b];
-    if (!c.inDomain || known.has(c.key)) continue;
+    if (!c.inDomain) continue;
     const verdict = judge(freshGraphs[b], evaluations[b]);
-    if (verdict === null) continue;
+    if (verdict === null || known.has(c.key)) continue;
     known.add(c.key);
     newCounterexamples.push({ key: c.key, score: c.score, certification: verdict });
   }
-  const distinctFraction = distinctCount(fresh) / o.batch;
+  const distinctFraction = labelled.size / o.batch;
   let eliteSum = 0;
   let eliteInDomain = 0;
   for (const c of elite) {

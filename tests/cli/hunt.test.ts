@@ -99,7 +99,7 @@ describe('refute hunt / resume / dump (end to end)', () => {
       falseClaim,
       ...small,
       '--iterations',
-      '3',
+      '2',
       '--out',
       two,
       '--threads',
