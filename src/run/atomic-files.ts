@@ -6,44 +6,71 @@
  */
 import { closeSync, fsyncSync, openSync, renameSync, writeSync } from 'node:fs';
 import { dirname } from 'node:path';
+import { InputError } from '../errors.js';
+
+/**
+ * Runs a file operation, turning a system error (full disk, no permission, folder gone) into a
+ * one-line InputError that names the file; earlier files are left as they were.
+ */
+function guarded<T>(path: string, what: string, op: () => T): T {
+  try {
+    return op();
+  } catch (err) {
+    const code = (err as NodeJS.ErrnoException).code;
+    if (code === undefined) throw err;
+    const hint =
+      code === 'ENOSPC'
+        ? 'the disk is full'
+        : code === 'EACCES' || code === 'EPERM'
+          ? 'permission denied'
+          : code;
+    throw new InputError(`${path}: cannot ${what} (${hint}); earlier results in the folder are intact`);
+  }
+}
 
 /** fsync a folder so that a rename inside it is durable. */
 export function fsyncFolder(path: string): void {
-  const fd = openSync(path, 'r');
-  try {
-    fsyncSync(fd);
-  } finally {
-    closeSync(fd);
-  }
+  guarded(path, 'sync the folder', () => {
+    const fd = openSync(path, 'r');
+    try {
+      fsyncSync(fd);
+    } finally {
+      closeSync(fd);
+    }
+  });
 }
 
 /** Writes data to path, creating or truncating it, and fsyncs it. */
 export function writeDurably(path: string, data: string | Uint8Array): void {
-  const fd = openSync(path, 'w');
-  try {
-    if (typeof data === 'string') writeSync(fd, data);
-    else writeSync(fd, data);
-    fsyncSync(fd);
-  } finally {
-    closeSync(fd);
-  }
+  guarded(path, 'write', () => {
+    const fd = openSync(path, 'w');
+    try {
+      if (typeof data === 'string') writeSync(fd, data);
+      else writeSync(fd, data);
+      fsyncSync(fd);
+    } finally {
+      closeSync(fd);
+    }
+  });
 }
 
 /** Replaces path's content atomically. */
 export function replaceAtomically(path: string, data: string | Uint8Array): void {
   const temporary = `${path}.tmp`;
   writeDurably(temporary, data);
-  renameSync(temporary, path);
+  guarded(path, 'replace', () => renameSync(temporary, path));
   fsyncFolder(dirname(path));
 }
 
 /** Appends text to path (creating it) and fsyncs it. */
 export function appendDurably(path: string, text: string): void {
-  const fd = openSync(path, 'a');
-  try {
-    writeSync(fd, text);
-    fsyncSync(fd);
-  } finally {
-    closeSync(fd);
-  }
+  guarded(path, 'append to', () => {
+    const fd = openSync(path, 'a');
+    try {
+      writeSync(fd, text);
+      fsyncSync(fd);
+    } finally {
+      closeSync(fd);
+    }
+  });
 }

@@ -116,8 +116,14 @@ export function writeCheckpoint(dir: string, runId: string, state: HuntState): v
   const tmp = join(dir, 'checkpoint.tmp');
   const current = join(dir, 'checkpoint');
   const old = join(dir, 'checkpoint.old');
-  rmSync(tmp, { recursive: true, force: true });
-  mkdirSync(tmp);
+  try {
+    rmSync(tmp, { recursive: true, force: true });
+    mkdirSync(tmp);
+  } catch (err) {
+    throw new InputError(
+      `${tmp}: cannot create the checkpoint folder (${(err as NodeJS.ErrnoException).code ?? String(err)})`,
+    );
+  }
   writeDurably(join(tmp, 'weights.bin'), weights);
   writeDurably(join(tmp, 'optimizer.bin'), optimizer);
   writeDurably(join(tmp, 'state.json'), JSON.stringify(stored) + '\n');
