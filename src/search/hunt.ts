@@ -65,7 +65,7 @@ export interface HuntOptions {
   /** Repair disconnected samples (the conjecture counts connected graphs only). */
   readonly connected: boolean;
   /**
-   * Collapse handling: distinct elite and pool, clamped probabilities, perturbation and restart.
+   * Collapse handling: distinct pool, clamped probabilities, perturbation and restart.
    * Off gives the plain method, kept for comparison (tests/bench/iteration.bench.ts).
    */
   readonly explore: boolean;
@@ -201,7 +201,9 @@ export async function runIteration(
   const keepCount = Math.round(o.keep * o.batch);
   // Right after a perturbation or restart the elite comes from fresh samples only (collapse.ts).
   const eliteFrom = o.explore && state.collapse.freshOnly > 0 ? rankCandidates(fresh) : ranked;
-  const elite = takeTop(eliteFrom, eliteCount, o.explore);
+  // The elite keeps duplicates (the policy should learn what is best, as often as it is best);
+  // the carried pool is distinct, so that it does not fill with copies of one near miss.
+  const elite = takeTop(eliteFrom, eliteCount, false);
   const pool = takeTop(ranked, keepCount, o.explore);
   const previousBest = state.best.length > 0 ? state.best[0].score : -Infinity;
   const best = mergeBest(state.best, ranked, o.bestCapacity);
