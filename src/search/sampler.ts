@@ -70,10 +70,10 @@ export class FastSampler {
   private readonly order: number;
   private readonly pairs: number;
   private readonly width: number;
-  /** Rows 0..N-1 of the first kernel: the contribution of each decided edge. */
-  private readonly edgeRows: tfTypes.Tensor2D;
-  /** Rows N..2N-1 of the first kernel plus the first bias: the position term. */
-  private readonly positionRows: tfTypes.Tensor2D;
+  /** Rows 0..N-1 of the first kernel, one tensor each: the contribution of each decided edge. */
+  private readonly edgeRows: tfTypes.Tensor1D[];
+  /** Rows N..2N-1 of the first kernel plus the first bias, one tensor each: the position term. */
+  private readonly positionRows: tfTypes.Tensor1D[];
   private readonly kernels: tfTypes.Tensor2D[] = [];
   private readonly biases: tfTypes.Tensor1D[] = [];
 
@@ -87,13 +87,18 @@ export class FastSampler {
     this.width = s[1];
     const n = this.pairs;
     const w1 = weights.kernels[0];
-    this.edgeRows = tf.tensor2d(w1.subarray(0, n * this.width), [n, this.width]);
+    // One tensor per row, made once, so that no step pays for slicing.
+    this.edgeRows = Array.from({ length: n }, (_, i) =>
+      tf.tensor1d(w1.subarray(i * this.width, (i + 1) * this.width)),
+    );
     const pos = new Float32Array(n * this.width);
     const b1 = weights.biases[0];
     for (let i = 0; i < n; i++) {
       for (let h = 0; h < this.width; h++) pos[i * this.width + h] = w1[(n + i) * this.width + h] + b1[h];
     }
-    this.positionRows = tf.tensor2d(pos, [n, this.width]);
+    this.positionRows = Array.from({ length: n }, (_, i) =>
+      tf.tensor1d(pos.subarray(i * this.width, (i + 1) * this.width)),
+    );
     for (let k = 1; k + 1 < s.length; k++) {
       this.kernels.push(tf.tensor2d(weights.kernels[k], [s[k], s[k + 1]]));
       this.biases.push(tf.tensor1d(weights.biases[k]));
@@ -116,7 +121,7 @@ export class FastSampler {
     let pre: tfTypes.Tensor2D = tf.zeros([count, width]);
     for (let i = 0; i < n; i++) {
       const p = tf.tidy(() => {
-        let h = tf.relu(tf.add(pre, tf.slice(this.positionRows, [i, 0], [1, width]))) as tfTypes.Tensor2D;
+        let h = tf.relu(tf.add(pre, this.positionRows[i])) as tfTypes.Tensor2D;
         const last = this.kernels.length - 1;
         for (let k = 0; k <= last; k++) {
           h = tf.fused.matMul({
@@ -144,11 +149,7 @@ export class FastSampler {
       }
       if (any && i + 1 < n) {
         const next = tf.tidy(
-          () =>
-            tf.add(
-              pre,
-              tf.mul(tf.tensor2d(column, [count, 1]), tf.slice(this.edgeRows, [i, 0], [1, width])),
-            ) as tfTypes.Tensor2D,
+          () => tf.add(pre, tf.mul(tf.tensor2d(column, [count, 1]), this.edgeRows[i])) as tfTypes.Tensor2D,
         );
         pre.dispose();
         pre = next;
@@ -167,6 +168,6 @@ export class FastSampler {
 
   /** Frees the tensors. */
   dispose(): void {
-    this.tf.dispose([this.edgeRows, this.positionRows, ...this.kernels, ...this.biases]);
+    this.tf.dispose([...this.edgeRows, ...this.positionRows, ...this.kernels, ...this.biases]);
   }
 }
