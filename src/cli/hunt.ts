@@ -77,7 +77,9 @@ function runName(name: string, seed: string): string {
 export function addHuntCommand(program: Command, outcome: CommandOutcome): void {
   program
     .command('hunt')
-    .description('search for a counterexample with the cross-entropy method and a neural policy')
+    .description(
+      'search for a counterexample with the cross-entropy method and a neural policy; without --iterations, --minutes or --until-found it runs until Ctrl-C, which stops it cleanly',
+    )
     .argument('<file>', 'conjecture file (.ts)')
     .option('--conjecture <name>', 'which conjecture, when the file exports several')
     .option('--vertices <n>', "order of the graphs (default: the conjecture's vertices)")
