@@ -41,3 +41,10 @@ export type {
   GraphInvariants,
   Evaluation,
 } from './conjecture/types.js';
+export {
+  certifyCounterexample,
+  isCertifiedCounterexample,
+  type Certificate,
+  type CertifiedInput,
+  type Verdict,
+} from './certify/certify.js';

@@ -6,6 +6,7 @@
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.js';
 import { addInvariantsCommand } from './invariants.js';
+import { addCertifyCommand } from './certify.js';
 import { addCheckCommand } from './check.js';
 import { addGenerateCommand } from './generate.js';
 import { addSweepCommand } from './sweep.js';
@@ -35,6 +36,7 @@ export function buildProgram(outcome: CommandOutcome): Command {
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   addInvariantsCommand(program, outcome);
   addCheckCommand(program, outcome);
+  addCertifyCommand(program, outcome);
   addGenerateCommand(program, outcome);
   addSweepCommand(program, outcome);
   addHuntCommand(program, outcome);

@@ -6,8 +6,9 @@
  * @see B. D. McKay, "Isomorph-free exhaustive generation", J. Algorithms 26 (1998) 306–324.
  *
  * A graph H on m vertices has a canonical parent: H minus its canonical last vertex m(H), the
- * vertex that the canonical labelling of canonical.ts puts at position m-1. (That labelling
- * starts from the degree partition, so m(H) always has maximum degree.) A child H = G + v of a
+ * vertex that the canonical labelling of canonical.ts puts at position m-1. (Its first
+ * refinement of the unit partition sorts vertices by increasing degree and cells only split in
+ * place, so m(H) always has maximum degree.) A child H = G + v of a
  * graph G on m-1 vertices, made by joining a new vertex v to a subset S of G's vertices, is
  * accepted exactly when v lies in the automorphism-group orbit of m(H), that is, when G is
  * H's canonical parent up to isomorphism. Then every isomorphism class on m vertices is
@@ -32,7 +33,10 @@ import { graphFromRows } from '../graph/builders.js';
 import { canonicalSearchRows, type CanonicalSearchResult } from '../graph/canonical.js';
 import { PartitionRefiner } from '../graph/partition-refinement.js';
 
-/** Largest order generate accepts: graphs are one 32-bit word per row, and 16 already has ~6.4e22 classes. */
+/**
+ * Largest order generate accepts: graphs are one 32-bit word per row and subsets 16-bit masks;
+ * order 16 already has about 6.4e22 classes (OEIS A000088, from memory), far beyond any run.
+ */
 export const MAX_ENUMERATION_ORDER = 16;
 
 /** Largest automorphism group of a parent whose elements are listed to test subset orbits. */

@@ -10,7 +10,7 @@
  *
  * @remarks Exact at every order, but the worst case is exponential (the problem is NP-hard).
  * Measured by tests/bench/hard-invariants.bench.ts (seeded G(n, p)): under 0.05 ms per graph for
- * n ≤ 40 at densities 0.1–0.8; about 5 ms at n = 100, p = 0.8; 20 ms at n = 100, p = 0.9; 0.3–0.5 s
+ * n ≤ 40 at densities 0.1–0.8; 5–25 ms at n = 100, p = 0.8; 20 ms at n = 100, p = 0.9; 0.3–0.5 s
  * at n = 150, p = 0.8. Well under a second up to about 100 vertices at any density.
  *
  * @see P. San Segundo, D. Rodríguez-Losada, A. Jiménez, "An exact bit-parallel algorithm for the

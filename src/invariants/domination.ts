@@ -12,10 +12,10 @@
  *
  * @remarks Exact at every order, but the worst case is exponential (the problem is NP-hard), and
  * sparse graphs are the hard side (γ is large there). Measured by
- * tests/bench/hard-invariants.bench.ts (seeded G(n, p)): at most 1 ms per graph for n ≤ 40 at
- * densities 0.1–0.8; worst of 5 graphs 7 ms at n = 60, p = 0.1; 0.1 s at n = 70, p = 0.1; 0.4 s
- * at n = 80, p = 0.1 and at n = 100, p = 0.3; 1.4 s at n = 90, p = 0.1. Well under a second up
- * to about 80 vertices.
+ * tests/bench/hard-invariants.bench.ts (seeded G(n, p)): at most 2 ms per graph for n ≤ 40 at
+ * densities 0.1–0.8; worst of 5 graphs 10–25 ms at n = 50 and 60, p = 0.1; 0.1–0.45 s at
+ * n = 70, p = 0.1; 0.4 s at n = 80, p = 0.1 and at n = 100, p = 0.3; 1.4 s at n = 90, p = 0.1.
+ * Well under a second up to about 80 vertices.
  *
  * @see T. W. Haynes, S. T. Hedetniemi, P. J. Slater, "Fundamentals of Domination in Graphs",
  *   Marcel Dekker, 1998 (definitions).

@@ -8,7 +8,7 @@
  *
  * @remarks Exact at every order; the cost is that of a maximum clique of the complement, so sparse
  * graphs are the hard side. Measured by tests/bench/hard-invariants.bench.ts (seeded G(n, p)):
- * under 0.05 ms per graph for n ≤ 40 at densities 0.1–0.8; 4 ms at n = 100, p = 0.1 (worst of 5)
+ * under 0.05 ms per graph for n ≤ 40 at densities 0.1–0.8; 4–20 ms at n = 100, p = 0.1 (worst of 5)
  * but 65–95 ms on other seeds, 0.2 s at n = 120, p = 0.1, 2.5–3.3 s at n = 150, p = 0.1, and
  * minutes at n = 200, p = 0.1. Well under a second up to about 120 vertices; sparse graphs of 150
  * or more vertices can take seconds to minutes.

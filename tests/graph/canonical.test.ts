@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, test } from 'vitest';
 import seedrandom from 'seedrandom';
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
-import { type Graph, hasEdge, graphsEqual } from '../../src/graph/graph.js';
+import { type Graph, edgeList, hasEdge, graphsEqual } from '../../src/graph/graph.js';
 import { fromEdges, relabel } from '../../src/graph/builders.js';
 import { decodeGraph6 } from '../../src/graph/graph6.js';
 import * as families from '../../src/graph/families.js';
@@ -114,6 +114,13 @@ function rook4x4(): Graph {
   return fromEdges(16, edges);
 }
 
+function disjointCopies(h: Graph, k: number): Graph {
+  const edges: Array<[number, number]> = [];
+  for (let c = 0; c < k; c++)
+    for (const [u, v] of edgeList(h)) edges.push([u + c * h.order, v + c * h.order]);
+  return fromEdges(h.order * k, edges);
+}
+
 function adjacencySpectrumOracle(g: Graph): number[] {
   const a = Matrix.zeros(g.order, g.order);
   for (let u = 0; u < g.order; u++) for (let v = 0; v < g.order; v++) if (hasEdge(g, u, v)) a.set(u, v, 1);
@@ -220,6 +227,12 @@ describe('canonicalSearch() on highly symmetric graphs', () => {
     ['Shrikhande', shrikhande(), 192n],
     ['K4 □ K4', rook4x4(), 1152n],
   ];
+  // k disjoint copies of a connected graph H: |Aut| = |Aut H|^k k! (wreath product, standard).
+  cases.push(
+    ['6 disjoint Petersen graphs', disjointCopies(families.petersen(), 6), 120n ** 6n * factorial(6)],
+    ['10 disjoint K_{3,3}', disjointCopies(families.completeBipartite(3, 3), 10), 72n ** 10n * factorial(10)],
+    ['32 disjoint edges', disjointCopies(families.complete(2), 32), 2n ** 32n * factorial(32)],
+  );
   for (const [name, g, order] of cases) {
     test(`canonicalSearch() finds the automorphism group of ${name} (order ${order})`, () => {
       expect(canonicalSearch(g).groupSize).toBe(order);
