@@ -1,13 +1,13 @@
 /**
- * The run's result files: best.g6 (the best-ever distinct graphs, best first, one graph6 per
- * line, replaced atomically), counterexamples.g6 (append-only, one key per line, never a
+ * The run's result files: best.g6 (the best-ever distinct graphs, best first, one canonical
+ * graph6 per line, replaced atomically), counterexamples.g6 (append-only, one key per line, never a
  * duplicate even across a crash and resume) and summary.json (the same graphs with their scores,
  * certification and a few key invariants, replaced atomically).
  */
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fromUpperTriangleBits } from '../graph/builders.js';
-import { decodeGraph6, encodeGraph6 } from '../graph/graph6.js';
+import { decodeGraph6 } from '../graph/graph6.js';
 import { type Graph } from '../graph/graph.js';
 import { componentCount } from '../invariants/components.js';
 import { type CounterexampleRecord, type HuntState } from '../search/hunt.js';
@@ -25,10 +25,12 @@ export function summaryPath(dir: string): string {
   return join(dir, 'summary.json');
 }
 
-/** Rewrites best.g6 from the state's best-ever list. */
+/**
+ * Rewrites best.g6 from the state's best-ever list, each graph by its key (canonical graph6),
+ * so that a graph reads the same in best.g6, counterexamples.g6 and summary.json.
+ */
 export function writeBest(dir: string, state: HuntState): void {
-  const order = state.weights.shape.order;
-  const lines = state.best.map((c) => encodeGraph6(fromUpperTriangleBits(order, c.bits)) + '\n');
+  const lines = state.best.map((c) => c.key + '\n');
   replaceAtomically(bestPath(dir), lines.join(''));
 }
 
@@ -89,7 +91,7 @@ export function writeSummary(dir: string, state: HuntState, context: SummaryCont
     })),
     best: state.best.map((c) => {
       const g = fromUpperTriangleBits(order, c.bits);
-      return { graph6: encodeGraph6(g), score: jsonScore(c.score), ...keyInvariants(g) };
+      return { graph6: c.key, score: jsonScore(c.score), ...keyInvariants(g) };
     }),
   };
   replaceAtomically(summaryPath(dir), JSON.stringify(summary, null, 2) + '\n');
