@@ -12,6 +12,8 @@ import { evaluateConjecture } from '../conjecture/evaluate.js';
 import { type Conjecture } from '../conjecture/types.js';
 import { type LoadedConjectureFile } from '../conjecture/load.js';
 import { judgeCounterexample } from '../search/counterexample.js';
+import { graphKey } from '../search/graph-key.js';
+import { certifyCounterexample } from '../certify/certify.js';
 import { HUNT_DEFAULTS } from '../search/hunt.js';
 import { type HuntTarget, type StopConditions, createRun, freshState } from '../run/hunt-run.js';
 import { type RunOptions } from '../run/manifest.js';
@@ -40,14 +42,32 @@ interface HuntFlags {
   plain?: boolean;
 }
 
+/**
+ * The hunt's view of a loaded conjecture. A graph counts as a counterexample only when exact
+ * certification confirms it (src/certify); a positive float score that certification does not
+ * confirm ("numerical only", an equality case) stays among the best graphs but is never written
+ * to counterexamples.g6. Verdicts are remembered per isomorphism class, since a converging
+ * policy samples the same graph many times.
+ */
 export function huntTarget(file: LoadedConjectureFile, c: Conjecture): HuntTarget {
+  const verdicts = new Map<string, 'certified' | null>();
   return {
     name: c.name,
     path: file.path,
     sha256: file.sha256,
     connected: c.connected,
     evaluate: (g) => evaluateConjecture(c, g),
-    judge: judgeCounterexample,
+    judge: (g, evaluation) => {
+      if (judgeCounterexample(g, evaluation) === null) return null;
+      const key = graphKey(g);
+      let verdict = verdicts.get(key);
+      if (verdict === undefined) {
+        verdict = certifyCounterexample(c, g).certified ? 'certified' : null;
+        if (verdicts.size >= 100_000) verdicts.clear();
+        verdicts.set(key, verdict);
+      }
+      return verdict;
+    },
   };
 }
 
