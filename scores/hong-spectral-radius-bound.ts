@@ -7,7 +7,9 @@
  *
  * The equality cases make it a test of rounding: on K_n and K_{1,n−1} the floating-point score
  * is within about 1e-15 of 0 and may come out positive. `refute check` reports such graphs as
- * "holds (tight)", never as counterexamples; certification settles them exactly.
+ * "holds (tight)", never as counterexamples; certification settles them exactly. Of the 11,117
+ * connected graphs on 8 vertices (refute generate --vertices 8 --connected | refute check FILE
+ * --stdin) exactly two are tight, K_8 and K_{1,7}, as the theorem says.
  *
  *   refute check scores/hong-spectral-radius-bound.ts --families --max-vertices 20
  *

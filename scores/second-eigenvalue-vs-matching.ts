@@ -14,8 +14,10 @@
  * gives λ2 >= √k. So T(k, k) refutes the claim for every k >= 5: the smallest, on 13 vertices, is
  * 'LkaCC?_G@?C?G?' (λ2 = √5 ≈ 2.2361 numerically). T(4, 4) on 11 vertices, 'JkaC@?_G@??', is an
  * equality case (λ2 = 2 = ν), and T(5, 4) is a counterexample on 12 vertices, 'KkaCC?_G@?C?'
- * (λ2 ≈ 2.0933). Whether one exists on 8 to 11 vertices we have not settled; random local
- * search found none. (Vertex numbering: c1 = 0, c2 = 1, w = 2, then c1's leaves, then c2's.)
+ * (λ2 ≈ 2.0933). None exists on 10 vertices or fewer: all 11,716,571 connected graphs on 10
+ * vertices (and all on 8 and 9) pass `refute generate --vertices N --connected | refute check
+ * FILE --stdin`, the best scoring −0.1610 (T(4, 3)); whether one exists on 11 we have not
+ * settled. (Vertex numbering: c1 = 0, c2 = 1, w = 2, then c1's leaves, then c2's.)
  *
  * At the default order 14 the best counterexample we know is T(6, 5), 'MkaCCA?G@?C?G?G??',
  * scoring λ2 − ν ≈ 0.3199. The plain cross-entropy method stalls on it: in a one-off experiment

@@ -4,9 +4,10 @@
  * The spectral radius is never below the average degree (L. Collatz and U. Sinogowitz,
  * "Spektren endlicher Grafen", Abh. Math. Sem. Univ. Hamburg 21 (1957) 63–77), and for
  * regular graphs the two are equal. The claim below says it never exceeds it by more than 1.
- * It holds on every connected graph with at most 7 vertices (largest score −0.2648, on 'F??Fw'),
- * which makes it look safe, but the star K_{1,8} breaks it: λ1 = √8 ≈ 2.8284 while the average
- * degree plus one is 16/9 + 1 ≈ 2.7778. So does every larger star (√(n−1) grows, 3 − 2/n does not).
+ * It holds on every connected graph with at most 7 vertices (largest score −0.2648, on 'F??Fw')
+ * and on all 11,117 connected graphs with 8 (refute generate | refute check), which makes it look
+ * safe, but the star K_{1,8} breaks it: λ1 = √8 ≈ 2.8284 while the average degree plus one is
+ * 16/9 + 1 ≈ 2.7778. So does every larger star (√(n−1) grows, 3 − 2/n does not).
  *
  *   refute check scores/spectral-radius-near-average-degree.ts --families
  *

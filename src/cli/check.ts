@@ -7,7 +7,7 @@
  * outside the conjecture's domain) and where the graph came from; then a summary per
  * conjecture. With --json, one JSON object per line instead, and no summary. Exit 0 when some
  * graph refutes a conjecture, 1 when none does, 2 on bad input (see conjecture/verdict.ts for
- * what counts as refuting until certification lands).
+ * what counts as refuting: certified counterexamples only).
  */
 import { type Command } from 'commander';
 import { InputError } from '../errors.js';
@@ -83,7 +83,13 @@ function parseMaxVertices(opts: CheckOptions): number {
 
 /** Counts per conjecture for the summary. */
 class Tally {
-  readonly counts: Record<VerdictKind, number> = { refutes: 0, holds: 0, tight: 0, 'outside-domain': 0 };
+  readonly counts: Record<VerdictKind, number> = {
+    refutes: 0,
+    'numerical-only': 0,
+    holds: 0,
+    tight: 0,
+    'outside-domain': 0,
+  };
   firstRefutation: Candidate | undefined = undefined;
   best: { score: number; candidate: Candidate } | undefined = undefined;
 
@@ -96,9 +102,12 @@ class Tally {
 
   summary(c: Conjecture): string {
     const k = this.counts;
-    const total = k.refutes + k.holds + k.tight + k['outside-domain'];
+    const total = k.refutes + k['numerical-only'] + k.holds + k.tight + k['outside-domain'];
     const parts = [
-      `${k.refutes} refute${k.refutes === 1 ? 's' : ''} it${k.refutes > 0 ? ' (numerical, not yet certified)' : ''}`,
+      `${k.refutes} refute${k.refutes === 1 ? 's' : ''} it (certified)`,
+      ...(k['numerical-only'] > 0
+        ? [`${k['numerical-only']} numerical only (score > 0, not certified)`]
+        : []),
       `${k.holds} hold`,
       `${k.tight} tight`,
       `${k['outside-domain']} outside the domain`,
@@ -112,14 +121,23 @@ class Tally {
   }
 }
 
-/** Output held back (finite input) or written as it comes (a stream), with back-pressure. */
+/** One line of the human output: [conjecture (when several)], graph6, score, verdict, source. */
+type Row = string[];
+
+/** Least widths of the columns (name, graph6, score, verdict); a wider cell widens its column. */
+const MIN_WIDTHS = { name: 0, graph6: 12, score: 14, verdict: 19 };
+
+/**
+ * Output held back (finite input) or written as it comes (a stream), with back-pressure. Rows
+ * held back together are aligned together; a streamed row is aligned to the least widths.
+ */
 class OutputBuffer {
-  private pending: string[] = [];
+  private pending: Array<string | Row> = [];
 
   constructor(private readonly holdBack: boolean) {}
 
-  add(text: string): void {
-    this.pending.push(text);
+  add(item: string | Row): void {
+    this.pending.push(item);
   }
 
   async flushIfStreaming(): Promise<void> {
@@ -127,7 +145,21 @@ class OutputBuffer {
   }
 
   async flush(): Promise<void> {
-    const text = this.pending.join('');
+    const rows = this.pending.filter((x): x is Row => Array.isArray(x));
+    const width = (k: number, least: number) => Math.max(least, ...rows.map((r) => r[k].length));
+    const w = [
+      width(0, MIN_WIDTHS.name),
+      width(1, MIN_WIDTHS.graph6),
+      width(2, MIN_WIDTHS.score),
+      width(3, MIN_WIDTHS.verdict),
+    ];
+    const text = this.pending
+      .map((x) => {
+        if (!Array.isArray(x)) return x;
+        const [name, graph6, score, verdict, source] = x;
+        return `${name === '' ? '' : name.padEnd(w[0]) + '  '}${graph6.padEnd(w[1])}  ${score.padStart(w[2])}  ${verdict.padEnd(w[3])}  ${source}\n`;
+      })
+      .join('');
     this.pending = [];
     if (text !== '') await writeOut(text);
   }
@@ -150,13 +182,17 @@ export function addCheckCommand(program: Command, outcome: CommandOutcome): void
     .addHelpText(
       'after',
       `
-Verdicts: "refutes (numerical)" (score > ${ROUNDING_MARGIN}; not yet certified exactly), "holds",
-"holds (tight)" (|score| <= ${ROUNDING_MARGIN}: an equality case as far as floating point can tell),
+Verdicts: "refutes (certified)" (score > 0, confirmed by exact arithmetic: see 'refute certify'),
+"score > 0, numerical only (not certified)" (a value that cannot be certified, or a margin within
+rounding), "holds", "holds (tight)" (an equality case: certification puts the score at 0 within
+rounding, or -${ROUNDING_MARGIN} <= score <= 0),
 "outside the domain" (not connected when the conjecture asks for it, or 'where' is false).
 Exit status: 0 when some graph refutes a conjecture, 1 when none does, 2 on bad input.
 
-Example:
-  refute check scores/spectral-star-bound.ts --families --max-vertices 10`,
+Examples:
+  refute check scores/spectral-radius-near-average-degree.ts --families
+  refute check scores/second-eigenvalue-vs-complement-degree.ts 'IJ~~~~~~w'
+  refute generate --vertices 7 | refute check my-claim.ts --stdin --json`,
     )
     .action(async (file: string, graphs: string[], opts: CheckOptions) => {
       const maxVertices = parseMaxVertices(opts);
@@ -177,14 +213,13 @@ Example:
       if (!opts.json) output.add(conjectures.map((c) => `${c.name}: ${c.statement}\n`).join(''));
       for await (const candidate of candidates(graphs, opts, maxVertices)) {
         const view = createGraphView(candidate.graph);
-        let text = '';
         conjectures.forEach((c, i) => {
           const evaluation = evaluateOnView(c, candidate.graph, view);
           const verdict = judge(c, candidate.graph, evaluation);
           const score = evaluation.inDomain ? evaluation.score : undefined;
           tallies[i].add(verdict.kind, candidate, score);
           if (opts.json) {
-            text +=
+            output.add(
               JSON.stringify({
                 conjecture: c.name,
                 graph6: candidate.graph6,
@@ -192,13 +227,19 @@ Example:
                 score: score === undefined ? null : invariantToJson(score),
                 verdict: verdict.kind,
                 certification: verdict.certification,
-              }) + '\n';
+              }) + '\n',
+            );
           } else {
             const shownScore = score === undefined ? '-' : formatNumber(score);
-            text += `${withName ? c.name + '  ' : ''}${candidate.graph6.padEnd(12)} ${shownScore.padStart(16)}  ${describeVerdict(verdict).padEnd(19)}  ${candidate.source}\n`;
+            output.add([
+              withName ? c.name : '',
+              candidate.graph6,
+              shownScore,
+              describeVerdict(verdict),
+              candidate.source,
+            ]);
           }
         });
-        output.add(text);
         await output.flushIfStreaming();
       }
       if (!opts.json) output.add(tallies.map((t, i) => t.summary(conjectures[i])).join(''));

@@ -41,7 +41,11 @@ function summaryLine(name: string, s: SweepOrderSummary, connectedOnly: boolean)
   const best = s.best === null ? 'no graph in the domain' : `best score ${s.best.score} (${s.best.graph6})`;
   return (
     `order ${s.order}${part}: ${s.graphs} ${kind}, ${s.inDomain} in the domain, ` +
-    `${s.counterexamples} refute '${name}' (numerical, not certified), ${best}\n`
+    `${s.counterexamples} certified counterexamples to '${name}'` +
+    (s.numericalOnly > 0
+      ? `, ${s.numericalOnly} numerical only (score > 0 within rounding, not certified)`
+      : '') +
+    `, ${best}\n`
   );
 }
 
@@ -91,13 +95,15 @@ export function addSweepCommand(program: Command, outcome: CommandOutcome): void
         },
         {
           counterexample: async (order: number, found: SweepCounterexample) => {
+            // Plain output lists certified counterexamples only; JSON lists both, flagged.
+            if (!json && !found.certified) return;
             const line = json
               ? JSON.stringify({
                   type: 'counterexample',
                   order,
                   graph6: found.graph6,
                   score: scoreToJson(found.score),
-                  certified: false,
+                  certified: found.certified,
                 })
               : found.graph6;
             await writeOut(line + '\n');
@@ -113,6 +119,7 @@ export function addSweepCommand(program: Command, outcome: CommandOutcome): void
                   graphs: summary.graphs,
                   inDomain: summary.inDomain,
                   counterexamples: summary.counterexamples,
+                  numericalOnly: summary.numericalOnly,
                   bestScore: summary.best === null ? null : scoreToJson(summary.best.score),
                   bestGraph6: summary.best === null ? null : summary.best.graph6,
                 }) + '\n',

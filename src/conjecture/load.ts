@@ -111,8 +111,14 @@ async function bundle(source: string, absolute: string, shown: string): Promise<
     const first = errors[0];
     const more =
       errors.length > 1 ? ` (and ${errors.length - 1} more error${errors.length > 2 ? 's' : ''})` : '';
+    const where = esbuildLocation(first, dir, shown, absolute);
+    if (first.text.startsWith('Top-level await')) {
+      throw new InputError(
+        `${where}: top-level await is not supported in a conjecture file (compute the value without await)`,
+      );
+    }
     const kind = first.text.startsWith('Could not resolve') ? 'cannot import' : 'syntax error';
-    throw new InputError(`${esbuildLocation(first, dir, shown, absolute)}: ${kind}: ${first.text}${more}`);
+    throw new InputError(`${where}: ${kind}: ${first.text}${more}`);
   }
 }
 

@@ -8,21 +8,19 @@ import { canonicalGraph6 } from '../graph/canonical.js';
 import { type Graph } from '../graph/graph.js';
 import { evaluateConjecture } from '../conjecture/evaluate.js';
 import { type Conjecture } from '../conjecture/types.js';
+import { isCertifiedCounterexample } from '../certify/certify.js';
 import { GraphEnumerator, type EnumerationPart } from './graph-enumerator.js';
 
 /**
- * Whether a score refutes the claim. NUMERICAL ONLY: it trusts the float score's sign. Exact
- * certification (DESIGN.md, "Certification") is a later stage; until it lands, every
- * counterexample the sweep reports is numerical, and this is the one place that decides it.
+ * A graph whose float score is > 0: canonical graph6, score, and whether exact certification
+ * (src/certify, DESIGN.md "Certification") confirmed it. Only certified ones are counterexamples;
+ * the others are within rounding of an equality case (or use an invariant that cannot be
+ * certified) and are reported as "numerical only".
  */
-export function isNumericalCounterexample(score: number): boolean {
-  return score > 0;
-}
-
-/** A graph that refutes the claim numerically: canonical graph6 and score. */
 export interface SweepCounterexample {
   readonly graph6: string;
   readonly score: number;
+  readonly certified: boolean;
 }
 
 /** What one part of one order gave. */
@@ -33,7 +31,7 @@ export interface SweepPartResult {
   readonly graphs: number;
   /** Graphs in the conjecture's domain. */
   readonly inDomain: number;
-  /** Counterexamples in generation order, each in canonical graph6. */
+  /** Graphs with a positive float score in generation order, canonical graph6, certified or not. */
   readonly counterexamples: SweepCounterexample[];
   /** Highest score in the domain (the first graph reaching it), or null if the domain was empty here. */
   readonly best: SweepCounterexample | null;
@@ -54,12 +52,25 @@ export function sweepPart(conjecture: Conjecture, order: number, part: Enumerati
     if (!evaluation.inDomain) continue;
     inDomain++;
     const score = evaluation.score;
-    if (isNumericalCounterexample(score)) counterexamples.push({ graph6: canonicalGraph6(g), score });
+    if (score > 0) {
+      counterexamples.push({
+        graph6: canonicalGraph6(g),
+        score,
+        certified: isCertifiedCounterexample(conjecture, g),
+      });
+    }
     if (bestGraph === null || score > bestScore) {
       bestScore = score;
       bestGraph = g;
     }
   }
-  const best = bestGraph === null ? null : { graph6: canonicalGraph6(bestGraph), score: bestScore };
+  const best =
+    bestGraph === null
+      ? null
+      : {
+          graph6: canonicalGraph6(bestGraph),
+          score: bestScore,
+          certified: counterexamples.some((c) => c.certified && c.score === bestScore),
+        };
   return { order, part, graphs, inDomain, counterexamples, best };
 }

@@ -48,7 +48,10 @@ export interface SweepOrderSummary {
   readonly part: EnumerationPart;
   readonly graphs: number;
   readonly inDomain: number;
+  /** Certified counterexamples. */
   readonly counterexamples: number;
+  /** Graphs with a positive float score that certification did not confirm. */
+  readonly numericalOnly: number;
   readonly best: SweepCounterexample | null;
 }
 
@@ -89,6 +92,7 @@ class OrderedEmitter {
   private graphs = 0;
   private inDomain = 0;
   private counterexamples = 0;
+  private numericalOnly = 0;
   private best: SweepCounterexample | null = null;
   anyCounterexample = false;
 
@@ -100,11 +104,14 @@ class OrderedEmitter {
   async emit(unit: Unit, result: SweepPartResult): Promise<void> {
     this.graphs += result.graphs;
     this.inDomain += result.inDomain;
-    this.counterexamples += result.counterexamples.length;
+    for (const found of result.counterexamples) {
+      if (found.certified) this.counterexamples++;
+      else this.numericalOnly++;
+    }
     if (result.best !== null && (this.best === null || result.best.score > this.best.score))
       this.best = result.best;
     for (const found of result.counterexamples) {
-      this.anyCounterexample = true;
+      if (found.certified) this.anyCounterexample = true;
       await this.sink.counterexample(unit.order, found);
     }
     if (unit.unitIndex === unit.units - 1) {
@@ -114,11 +121,13 @@ class OrderedEmitter {
         graphs: this.graphs,
         inDomain: this.inDomain,
         counterexamples: this.counterexamples,
+        numericalOnly: this.numericalOnly,
         best: this.best,
       });
       this.graphs = 0;
       this.inDomain = 0;
       this.counterexamples = 0;
+      this.numericalOnly = 0;
       this.best = null;
     }
   }
@@ -228,8 +237,7 @@ async function runInWorkers(request: SweepRequest, plan: Unit[], emitter: Ordere
 }
 
 /**
- * Runs the sweep; resolves to whether any graph refuted the claim (numerically; see
- * isNumericalCounterexample).
+ * Runs the sweep; resolves to whether any graph refuted the claim with a certificate.
  */
 export async function runSweep(request: SweepRequest, sink: SweepSink): Promise<boolean> {
   const plan = planUnits(request);

@@ -44,6 +44,7 @@ describe('sweep + certification', () => {
       for (let order = 1; order <= c.vertices; order++) {
         for (const found of sweepPart(c, order, { index: 0, count: 1 }).counterexamples) {
           numerical++;
+          expect(found.certified, `${c.name} on ${found.graph6}`).toBe(false);
           const cert = certifyCounterexample(c, decodeGraph6(found.graph6));
           expect(cert.certified, `${c.name} on ${found.graph6}: ${cert.reason}`).toBe(false);
         }

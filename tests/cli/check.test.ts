@@ -16,10 +16,18 @@ function refute(args: string[], stdin?: string): Promise<CliResult> {
   return runCli(args, { cwd: root, stdin });
 }
 
-// Every graph on 6 vertices: the atlas lines whose first byte is N(6) = 6 + 63 = 'E'.
-const sixVertexGraphs = readFileSync(path.join(root, 'tests/fixtures/atlas-1-7.g6'), 'utf8')
-  .split('\n')
-  .filter((line) => line.startsWith('E'));
+// Every graph on 6 vertices: the atlas lines whose first byte is N(6) = 6 + 63 = 'E'; networkx's
+// connectedness and maximum degree of each (tests/scripts/make_score_references.py).
+const atlas = readFileSync(path.join(root, 'tests/fixtures/atlas-1-7.g6'), 'utf8').trim().split('\n');
+const reference = JSON.parse(
+  readFileSync(path.join(root, 'tests/fixtures/score-references.json'), 'utf8'),
+) as {
+  atlasScores: Array<unknown[] | null>;
+  atlasMaxDegrees: number[];
+};
+const sixVertexGraphs = atlas.filter((line) => line.startsWith('E'));
+const disconnectedSix = atlas.filter((line, i) => line.startsWith('E') && reference.atlasScores[i] === null);
+const dominatedSix = atlas.filter((line, i) => line.startsWith('E') && reference.atlasMaxDegrees[i] === 5);
 
 const TWO_CLAIMS = scratch.write(
   'two-claims.ts',
@@ -59,7 +67,10 @@ describe('refute check', () => {
       records.filter((x) => x.conjecture === name && x.verdict === 'refutes');
     expect(refuting('always-connected').length).toBe(44);
     expect(refuting('no-dominating-vertex').length).toBe(34);
-    expect(new Set(refuting('always-connected').map((x) => x.certification))).toEqual(new Set(['numerical']));
+    // And exactly the graphs networkx finds disconnected / with a vertex of degree 5.
+    expect(refuting('always-connected').map((x) => x.graph6)).toEqual(disconnectedSix);
+    expect(refuting('no-dominating-vertex').map((x) => x.graph6)).toEqual(dominatedSix);
+    expect(new Set(refuting('always-connected').map((x) => x.certification))).toEqual(new Set(['certified']));
     expect(records[0].source).toBe('stdin line 1');
   });
 
@@ -70,9 +81,9 @@ describe('refute check', () => {
     const lines = r.stdout.trim().split('\n');
     expect(lines[0]).toBe('always-connected: Every graph is connected');
     expect(lines[1]).toMatch(/^Dhc\s+-1\s+holds\s+argument 1$/);
-    expect(lines[2]).toMatch(/^B\?\s+1\s+refutes \(numerical\)\s+argument 2$/);
+    expect(lines[2]).toMatch(/^B\?\s+1\s+refutes \(certified\)\s+argument 2$/);
     expect(lines[3]).toBe(
-      'always-connected: 2 graphs: 1 refutes it (numerical, not yet certified), 1 hold, 0 tight, 0 outside the domain; first counterexample B? (argument 2)',
+      'always-connected: 2 graphs: 1 refutes it (certified), 1 hold, 0 tight, 0 outside the domain; first counterexample B? (argument 2)',
     );
   });
 
@@ -109,7 +120,7 @@ describe('refute check', () => {
     expect(JSON.parse(known.stdout)).toMatchObject({
       graph6: 'IJ~~~~~~w',
       verdict: 'refutes',
-      certification: 'numerical',
+      certification: 'certified',
     });
   });
 
@@ -122,7 +133,7 @@ describe('refute check', () => {
       '14',
     ]);
     expect(r.status).toBe(1);
-    expect(r.stdout).toMatch(/: \d+ graphs: 0 refute it, .*; best score -\S+ on /);
+    expect(r.stdout).toMatch(/: \d+ graphs: 0 refute it \(certified\), .*; best score -\S+ on /);
   });
 
   it.each([

@@ -27,8 +27,8 @@ describe('refute sweep (end to end)', () => {
     const summaries = r.stderr.trimEnd().split('\n');
     expect(summaries.length).toBe(7);
     expect(summaries[6]).toBe(
-      "order 7: 853 connected graphs, 853 in the domain, 237 refute 'diameter-below-twice-radius' " +
-        `(numerical, not certified), best score 1 (${summaries[6].match(/\((\S+)\)$/)?.[1]})`,
+      'order 7: 853 connected graphs, 853 in the domain, 237 certified counterexamples to ' +
+        `'diameter-below-twice-radius', best score 1 (${summaries[6].match(/\((\S+)\)$/)?.[1]})`,
     );
   });
 
@@ -56,7 +56,7 @@ describe('refute sweep (end to end)', () => {
       order: 5,
       graph6: canonicalGraph6(decodeGraph6(reference.claims['triangle-free-is-bipartite']['5'][0])),
       score: 1,
-      certified: false,
+      certified: true,
     });
     const orders = records.filter((x) => x.type === 'order');
     // Triangle-free graphs on 5 and 6 vertices: 14 and 38 (OEIS A006785, from memory).

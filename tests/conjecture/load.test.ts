@@ -94,6 +94,17 @@ export default [
     expect(err.message).toBe(`${file}:4:${column}: syntax error: Unexpected "*"`);
   });
 
+  it('reports top-level await, which conjecture files cannot use, at its position', async () => {
+    const line2 = 'const k = await Promise.resolve(2);';
+    const file = scratch.write(
+      'await.ts',
+      `import { defineConjecture } from 'refute';\n${line2}\nexport default defineConjecture({ name: 'a', statement: 's', vertices: 3, score: (g) => g.n - k });\n`,
+    );
+    expect((await loadError(file)).message).toBe(
+      `${file}:2:${line2.indexOf('await') + 1}: top-level await is not supported in a conjecture file (compute the value without await)`,
+    );
+  });
+
   it('reports an import that cannot be resolved, with its position', async () => {
     const file = scratch.write(
       'missing-import.ts',

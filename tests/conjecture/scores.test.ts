@@ -34,6 +34,7 @@ const reference = JSON.parse(
     graph6: string;
     secondLargestEigenvalue: number;
   }>;
+  completeMinus4Cycle: Array<{ order: number; graph6: string; secondLargestEigenvalue: number }>;
 };
 
 const conjectures = new Map<string, Conjecture>();
@@ -168,6 +169,19 @@ describe('scores/second-eigenvalue-vs-complement-degree.ts (the quick hunt demo)
       expect(scoreOf(c, t.graph6), t.graph6).toBeCloseTo(expected, 9);
       expect(judge(c, decodeGraph6(t.graph6), { inDomain: true, score: expected }).kind).toBe(
         t.order >= 10 ? 'refutes' : 'holds',
+      );
+    }
+  });
+
+  it('is refuted by K_n minus a 4-cycle for n >= 9 and tight at n = 8: λ2 = 1 against 8/n (header)', () => {
+    const c = conjectures.get('second-eigenvalue-vs-complement-degree')!;
+    for (const t of reference.completeMinus4Cycle) {
+      // numpy agrees that λ2 = 1 (the eigenvector of the header).
+      expect(t.secondLargestEigenvalue).toBeCloseTo(1, 12);
+      const s = scoreOf(c, t.graph6)!;
+      expect(s, t.graph6).toBeCloseTo(1 - 8 / t.order, 12);
+      expect(judge(c, decodeGraph6(t.graph6), { inDomain: true, score: s }).kind).toBe(
+        t.order === 8 ? 'tight' : 'refutes',
       );
     }
   });

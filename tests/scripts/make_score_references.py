@@ -4,7 +4,7 @@ scores/, computed with networkx 2.8.8 and numpy 1.24 (Debian packages), independ
 
 For every graph of tests/fixtures/atlas-1-7.g6 (in file order) it records, for connected graphs,
 the score of each example in scoreNames order (null for disconnected graphs, which the examples
-exclude, and for lambda2 on one vertex):
+exclude, and for lambda2 on one vertex), and its maximum degree (for tests/cli/check.test.ts):
   spectral-radius-near-average-degree: lambda1 - 2m/n - 1
   second-eigenvalue-vs-matching:       lambda2 - nu          (nu: networkx max_weight_matching)
   hong-spectral-radius-bound:          lambda1 - sqrt(2m - n + 1)
@@ -14,7 +14,7 @@ of each example over networkx's own builds of the standard families on 2..20 ver
 cycles, stars, complete, complete bipartite, Turan, wheels, hypercubes, Petersen, friendship,
 lollipops, barbells, brooms, prisms, ladders), and lambda2 and nu of the two-star trees T(a, b)
 of scores/second-eigenvalue-vs-matching.ts, and lambda2 of K_n minus the edges of a star K_{1,k}
-(scores/second-eigenvalue-vs-complement-degree.ts).
+or of a 4-cycle (scores/second-eigenvalue-vs-complement-degree.ts).
 
 Run: /usr/bin/python3 tests/scripts/make_score_references.py
 """
@@ -113,9 +113,11 @@ def g6(g):
 with open(os.path.join(fixtures, "atlas-1-7.g6")) as f:
     atlas = [line.strip() for line in f if line.strip()]
 atlas_scores = []
+atlas_max_degrees = []
 for line in atlas:
     g = nx.from_graph6_bytes(line.encode("ascii"))
     atlas_scores.append(scores(g) if nx.is_connected(g) else None)
+    atlas_max_degrees.append(max(d for _, d in g.degree()))
 
 family_max = {}
 for g in families(20):
@@ -148,13 +150,21 @@ for n, k in [(9, 3), (10, 3), (10, 4), (12, 4)]:
         {"order": n, "starLeaves": k, "graph6": g6(g), "secondLargestEigenvalue": float(spectrum(g)[1])}
     )
 
+complete_minus_4_cycle = []
+for n in [8, 9, 12]:
+    g = nx.complete_graph(n)
+    g.remove_edges_from([(0, 1), (1, 2), (2, 3), (3, 0)])
+    complete_minus_4_cycle.append({"order": n, "graph6": g6(g), "secondLargestEigenvalue": float(spectrum(g)[1])})
+
 out = {
     "source": "tests/scripts/make_score_references.py with networkx %s, numpy %s" % (nx.__version__, np.__version__),
     "scoreNames": NAMES,
     "atlasScores": atlas_scores,
+    "atlasMaxDegrees": atlas_max_degrees,
     "familyMaxima": family_max,
     "twoStarTrees": trees,
     "completeMinusStar": complete_minus_star,
+    "completeMinus4Cycle": complete_minus_4_cycle,
 }
 with open(os.path.join(fixtures, "score-references.json"), "w") as f:
     json.dump(out, f, separators=(",", ":"))
@@ -162,5 +172,5 @@ with open(os.path.join(fixtures, "score-references.json"), "w") as f:
 for i, name in enumerate(NAMES):
     vals = [s[i] for s in atlas_scores if s is not None and s[i] is not None]
     print(name, "atlas max %.6g" % max(vals), "families max %.6g" % family_max[name]["score"], family_max[name]["graph6"])
-for t in trees + complete_minus_star:
+for t in trees + complete_minus_star + complete_minus_4_cycle:
     print(t)
