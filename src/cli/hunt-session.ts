@@ -19,6 +19,7 @@ import {
 import { type RunManifest } from '../run/manifest.js';
 import { formatNumber } from '../invariants/encode.js';
 import { writeOut } from './output.js';
+import { writeRunReport } from './report.js';
 import { type ExitStatus } from './main.js';
 
 function clock(ms: number): string {
@@ -65,6 +66,23 @@ export interface SessionInput {
   readonly stop: StopConditions;
   readonly threads: number;
   readonly resumed: boolean;
+  /** Keep DIR/report.html up to date (--report). */
+  readonly report?: boolean;
+}
+
+/**
+ * Rewrites report.html after an iteration, but not more often than ten times the time the last
+ * report took (and at least 5 s apart), so that on a long run the report costs under 10%.
+ */
+function reportRefresher(dir: string): { maybe(): Promise<void>; now(): Promise<void> } {
+  let nextAt = 0;
+  const now = async (): Promise<void> => {
+    const t0 = performance.now();
+    await writeRunReport(dir);
+    const took = performance.now() - t0;
+    nextAt = performance.now() + Math.max(5000, 10 * took);
+  };
+  return { now, maybe: async () => (performance.now() >= nextAt ? now() : undefined) };
 }
 
 export async function runSession(input: SessionInput): Promise<{ status: ExitStatus; result: DriveResult }> {
@@ -81,6 +99,7 @@ export async function runSession(input: SessionInput): Promise<{ status: ExitSta
       ? await workerBatchSource(input.threads, seed, input.manifest.conjecture.path, input.target.name)
       : localBatchSource(input.tf, seed, input.target.evaluate);
   let ran = 0;
+  const report = input.report ? reportRefresher(input.dir) : null;
   try {
     if (tty) process.stderr.write(`refute: run folder ${input.dir}\n`);
     const result = await driveRun(
@@ -93,12 +112,20 @@ export async function runSession(input: SessionInput): Promise<{ status: ExitSta
         stop: input.stop,
         flag,
         resumed: input.resumed,
-        onIteration: (report, state, elapsed) => {
+        onIteration: async (iteration, state, elapsed) => {
           ran++;
           if (tty) {
-            const line = progressLine(report, state, elapsed, input.manifest.options.batch, input.stop, ran);
+            const line = progressLine(
+              iteration,
+              state,
+              elapsed,
+              input.manifest.options.batch,
+              input.stop,
+              ran,
+            );
             process.stderr.write(`\r\x1b[2K${line.slice(0, (process.stderr.columns ?? 200) - 1)}`);
           }
+          await report?.maybe();
         },
         onCounterexample: async (c) => {
           if (tty) process.stderr.write('\n');
@@ -107,6 +134,7 @@ export async function runSession(input: SessionInput): Promise<{ status: ExitSta
       },
       input.state,
     );
+    await report?.now();
     if (tty) {
       const best = result.state.best.length > 0 ? formatNumber(result.state.best[0].score) : 'none';
       process.stderr.write(

@@ -38,6 +38,7 @@ interface HuntFlags {
   untilFound?: boolean;
   threads?: string;
   out?: string;
+  report?: boolean;
   conjecture?: string;
   plain?: boolean;
 }
@@ -119,6 +120,7 @@ export function addHuntCommand(program: Command, outcome: CommandOutcome): void 
     .option('--threads <t>', 'worker threads for sampling and scoring (same results for any t; default 1)')
     .option('--plain', 'the plain method, without collapse handling (for comparisons)')
     .option('--out <dir>', 'run folder (default runs/<name>-seed<s>-<time>)')
+    .option('--report', 'keep DIR/report.html up to date while the hunt runs')
     .action(async (file: string, flags: HuntFlags) => {
       const seed = flags.seed ?? '1';
       if (seed === '' || seed.length > 200)
@@ -168,6 +170,7 @@ export function addHuntCommand(program: Command, outcome: CommandOutcome): void 
         stop,
         threads,
         resumed: false,
+        report: flags.report === true,
       });
       outcome.status = status;
     });

@@ -15,6 +15,7 @@ interface ResumeFlags {
   minutes?: string;
   untilFound?: boolean;
   threads?: string;
+  report?: boolean;
 }
 
 export function addResumeCommand(program: Command, outcome: CommandOutcome): void {
@@ -26,6 +27,7 @@ export function addResumeCommand(program: Command, outcome: CommandOutcome): voi
     .option('--minutes <m>', 'stop after m minutes')
     .option('--until-found', 'stop at the first counterexample')
     .option('--threads <t>', 'worker threads for sampling and scoring (same results for any t; default 1)')
+    .option('--report', 'keep DIR/report.html up to date while the hunt runs')
     .action(async (dir: string, flags: ResumeFlags) => {
       const stop = stopConditions(flags);
       const threads = threadsOption(flags.threads);
@@ -34,7 +36,18 @@ export function addResumeCommand(program: Command, outcome: CommandOutcome): voi
       const target = huntTarget(loaded, selectConjecture(loaded, manifest.conjecture.name));
       const { startTensorflow, tf } = await import('../search/backend.js');
       await startTensorflow(1);
-      const { status } = await runSession({ tf, dir, manifest, target, state, stop, threads, resumed: true });
+      const report = flags.report === true;
+      const { status } = await runSession({
+        tf,
+        dir,
+        manifest,
+        target,
+        state,
+        stop,
+        threads,
+        resumed: true,
+        report,
+      });
       outcome.status = status;
     });
 }

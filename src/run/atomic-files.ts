@@ -4,7 +4,7 @@
  * POSIX recipe: rename is atomic within a file system), so a reader or a crash sees either the
  * old content or the new, never a mix. Appends are fsynced before returning.
  */
-import { closeSync, fsyncSync, openSync, renameSync, writeSync } from 'node:fs';
+import { closeSync, fsyncSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { InputError } from '../errors.js';
 
@@ -57,8 +57,14 @@ export function writeDurably(path: string, data: string | Uint8Array): void {
 /** Replaces path's content atomically. */
 export function replaceAtomically(path: string, data: string | Uint8Array): void {
   const temporary = `${path}.tmp`;
-  writeDurably(temporary, data);
-  guarded(path, 'replace', () => renameSync(temporary, path));
+  try {
+    writeDurably(temporary, data);
+    guarded(path, 'replace', () => renameSync(temporary, path));
+  } catch (err) {
+    // A half-written temporary file (full disk) must not be left behind.
+    rmSync(temporary, { force: true });
+    throw err;
+  }
   fsyncFolder(dirname(path));
 }
 

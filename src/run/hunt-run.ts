@@ -128,8 +128,12 @@ export interface DriveContext {
   readonly source: BatchSource;
   readonly stop: StopConditions;
   readonly flag: StopFlag;
-  /** Called after each iteration (the progress line). */
-  readonly onIteration?: (report: IterationReport, state: HuntState, elapsedMs: number) => void;
+  /** Called after each iteration, once its files are written (progress line, report); awaited. */
+  readonly onIteration?: (
+    report: IterationReport,
+    state: HuntState,
+    elapsedMs: number,
+  ) => void | Promise<void>;
   /** Called with each counterexample newly written to counterexamples.g6. */
   readonly onCounterexample?: (record: CounterexampleRecord) => void | Promise<void>;
   readonly resumed: boolean;
@@ -248,7 +252,7 @@ export async function driveRun(ctx: DriveContext, initial: HuntState): Promise<D
     }
     state = next;
     ran++;
-    ctx.onIteration?.(report, state, performance.now() - started);
+    await ctx.onIteration?.(report, state, performance.now() - started);
   }
   log.info(
     {
