@@ -176,12 +176,12 @@ export function renderRunReport(input: ReportInput): string {
           {
             label: 'best in batch',
             colour: '#1f77b4',
-            points: input.series.map((p) => [p.iteration, p.best] as const),
+            points: plotted.map((p) => [p.iteration, p.best] as const),
           },
           {
             label: 'elite mean',
             colour: '#ff7f0e',
-            points: input.series.map((p) => [p.iteration, p.eliteMean] as const),
+            points: plotted.map((p) => [p.iteration, p.eliteMean] as const),
           },
         ],
         {
