@@ -7,7 +7,7 @@
  * outside the conjecture's domain) and where the graph came from; then a summary per
  * conjecture. With --json, one JSON object per line instead, and no summary. Exit 0 when some
  * graph refutes a conjecture, 1 when none does, 2 on bad input (see conjecture/verdict.ts for
- * what counts as refuting until certification lands).
+ * what counts as refuting: certified counterexamples only).
  */
 import { type Command } from 'commander';
 import { InputError } from '../errors.js';
@@ -83,7 +83,13 @@ function parseMaxVertices(opts: CheckOptions): number {
 
 /** Counts per conjecture for the summary. */
 class Tally {
-  readonly counts: Record<VerdictKind, number> = { refutes: 0, holds: 0, tight: 0, 'outside-domain': 0 };
+  readonly counts: Record<VerdictKind, number> = {
+    refutes: 0,
+    'numerical-only': 0,
+    holds: 0,
+    tight: 0,
+    'outside-domain': 0,
+  };
   firstRefutation: Candidate | undefined = undefined;
   best: { score: number; candidate: Candidate } | undefined = undefined;
 
@@ -96,9 +102,12 @@ class Tally {
 
   summary(c: Conjecture): string {
     const k = this.counts;
-    const total = k.refutes + k.holds + k.tight + k['outside-domain'];
+    const total = k.refutes + k['numerical-only'] + k.holds + k.tight + k['outside-domain'];
     const parts = [
-      `${k.refutes} refute${k.refutes === 1 ? 's' : ''} it${k.refutes > 0 ? ' (numerical, not yet certified)' : ''}`,
+      `${k.refutes} refute${k.refutes === 1 ? 's' : ''} it (certified)`,
+      ...(k['numerical-only'] > 0
+        ? [`${k['numerical-only']} numerical only (score > 0, not certified)`]
+        : []),
       `${k.holds} hold`,
       `${k.tight} tight`,
       `${k['outside-domain']} outside the domain`,
@@ -173,8 +182,10 @@ export function addCheckCommand(program: Command, outcome: CommandOutcome): void
     .addHelpText(
       'after',
       `
-Verdicts: "refutes (numerical)" (score > ${ROUNDING_MARGIN}; not yet certified exactly), "holds",
-"holds (tight)" (|score| <= ${ROUNDING_MARGIN}: an equality case as far as floating point can tell),
+Verdicts: "refutes (certified)" (score > 0, confirmed by exact arithmetic: see 'refute certify'),
+"score > 0, numerical only (not certified)" (a value that cannot be certified, or a margin within
+rounding), "holds", "holds (tight)" (an equality case: certification puts the score at 0 within
+rounding, or -${ROUNDING_MARGIN} <= score <= 0),
 "outside the domain" (not connected when the conjecture asks for it, or 'where' is false).
 Exit status: 0 when some graph refutes a conjecture, 1 when none does, 2 on bad input.
 

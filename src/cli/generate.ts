@@ -8,6 +8,7 @@ import { GraphEnumerator, MAX_ENUMERATION_ORDER } from '../enumerate/graph-enume
 import { graph6LineLength, writeGraph6Line } from '../enumerate/graph6-bytes.js';
 import { parsePartSpec } from '../enumerate/part-spec.js';
 import { type CommandOutcome } from './main.js';
+import { writeOut } from './output.js';
 
 interface GenerateOptions {
   vertices?: string;
@@ -32,30 +33,6 @@ export function parseOrderOption(
   return n;
 }
 
-/**
- * A failed write (EPIPE when the consumer, like `head`, stopped reading) is reported to the
- * write's callback, which rejects and ends the command; the stream also emits it as an
- * 'error' event, which needs a listener or Node ends the process with a stack trace.
- */
-export function expectWriteErrorsInCallbacks(stream: NodeJS.WritableStream): void {
-  if (stream.listenerCount('error') === 0) stream.on('error', () => undefined);
-}
-
-/**
- * Writes bytes to a stream, resolving when the stream can take more (back-pressure) and
- * rejecting on a write error such as EPIPE (a consumer like `head` that stopped reading).
- */
-export function writeBytes(bytes: Uint8Array, stream: NodeJS.WritableStream = process.stdout): Promise<void> {
-  expectWriteErrorsInCallbacks(stream);
-  return new Promise((resolve, reject) => {
-    const ok = stream.write(bytes, (err) => {
-      if (err) reject(err);
-    });
-    if (ok) resolve();
-    else stream.once('drain', () => resolve());
-  });
-}
-
 export function addGenerateCommand(program: Command, outcome: CommandOutcome): void {
   program
     .command('generate')
@@ -73,13 +50,13 @@ export function addGenerateCommand(program: Command, outcome: CommandOutcome): v
       while (enumerator.next()) {
         used = writeGraph6Line(order, enumerator.rows, buffer, used);
         if (used >= CHUNK_BYTES) {
-          await writeBytes(buffer.subarray(0, used));
+          await writeOut(buffer.subarray(0, used));
           // The stream may still hold the written chunk: fill a fresh buffer.
           buffer = new Uint8Array(CHUNK_BYTES + lineLength);
           used = 0;
         }
       }
-      if (used > 0) await writeBytes(buffer.subarray(0, used));
+      if (used > 0) await writeOut(buffer.subarray(0, used));
       outcome.status = 0;
     });
 }

@@ -8,7 +8,7 @@ import { join } from 'node:path';
 import { InputError } from '../errors.js';
 import { readRunFiles, readScoreSeries } from '../report/run-files.js';
 import { renderRunReport } from '../report/html-report.js';
-import { writeFileAtomically } from '../report/write-file-atomically.js';
+import { replaceAtomically } from '../run/atomic-files.js';
 import { loadConjectureFile, selectConjecture } from '../conjecture/load.js';
 import { type CommandOutcome } from './main.js';
 
@@ -40,7 +40,7 @@ export async function writeRunReport(dir: string, top = 6): Promise<string> {
   const series = await readScoreSeries(dir);
   const { statement, note } = await statementOf(run.manifest);
   const path = join(dir, 'report.html');
-  writeFileAtomically(path, renderRunReport({ run, series, statement, statementNote: note, top }));
+  replaceAtomically(path, renderRunReport({ run, series, statement, statementNote: note, top }));
   return path;
 }
 

@@ -17,7 +17,7 @@ import { MAX_ENUMERATION_ORDER } from '../enumerate/graph-enumerator.js';
 import { formatPartSpec, parsePartSpec } from '../enumerate/part-spec.js';
 import { runSweep, type SweepOrderSummary } from '../enumerate/sweep.js';
 import { type SweepCounterexample } from '../enumerate/sweep-part.js';
-import { expectWriteErrorsInCallbacks, parseOrderOption } from './generate.js';
+import { parseOrderOption } from './generate.js';
 import { type CommandOutcome } from './main.js';
 import { writeOut } from './output.js';
 
@@ -81,7 +81,6 @@ export function addSweepCommand(program: Command, outcome: CommandOutcome): void
       const loaded = await loadConjectureFile(file);
       const conjecture = selectConjecture(loaded, opts.conjecture);
       const json = opts.json === true;
-      expectWriteErrorsInCallbacks(process.stdout);
       const refuted = await runSweep(
         {
           conjecture,

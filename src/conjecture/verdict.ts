@@ -1,31 +1,49 @@
 /**
  * The verdict on one graph, and the exit status of a check: the single place that decides what
- * counts as a counterexample until exact certification (src/certify) replaces it.
+ * counts as a counterexample for `check`.
  *
- * For now a score is judged numerically: |score| <= ROUNDING_MARGIN is "tight" (an equality
- * case as far as floating point can tell: a true theorem that is tight on g may give +1e-15 by
- * rounding), score > ROUNDING_MARGIN "refutes" with certification "numerical", a lower score
- * "holds". The margin is absolute, a common-practice tolerance for scores of moderate size; it
- * is not a proof, which is why the certification field says "numerical".
+ * A graph with a positive float score is a counterexample only when exact certification
+ * (src/certify, DESIGN.md "Certification") confirms it. Otherwise it is an equality case
+ * ("tight": a true theorem that is tight on g may give +1e-15 by rounding) or "numerical only"
+ * (the score uses a value that cannot be certified exactly, such as estradaIndex, or its margin
+ * is within rounding). A non-positive score within ROUNDING_MARGIN of 0 is labelled "tight" too;
+ * that label is informational (the claim holds on g either way).
  */
 import { type Graph } from '../graph/graph.js';
+import { certifyCounterexample } from '../certify/certify.js';
 import { type Conjecture, type Evaluation } from './types.js';
 
-/** Scores within this distance of 0 are treated as equality cases. */
+/** Non-positive scores within this distance of 0 are labelled as equality cases. */
 export const ROUNDING_MARGIN = 1e-9;
 
-export type VerdictKind = 'refutes' | 'holds' | 'tight' | 'outside-domain';
+export type VerdictKind = 'refutes' | 'numerical-only' | 'holds' | 'tight' | 'outside-domain';
 
 export interface Verdict {
   readonly kind: VerdictKind;
-  /** How a refutation is known: "numerical" (float score) until the certifier lands; null otherwise. */
-  readonly certification: 'numerical' | null;
+  /** "certified" for a refutation; "numerical" for a positive float score that was not certified; else null. */
+  readonly certification: 'certified' | 'numerical' | null;
 }
 
-/** The verdict on g given its evaluation (c and g are for the exact certifier that will replace this). */
-export function judge(_c: Conjecture, _g: Graph, evaluation: Evaluation): Verdict {
+/** The verdict on g given its evaluation. */
+export function judge(c: Conjecture, g: Graph, evaluation: Evaluation): Verdict {
   if (!evaluation.inDomain) return { kind: 'outside-domain', certification: null };
-  if (evaluation.score > ROUNDING_MARGIN) return { kind: 'refutes', certification: 'numerical' };
+  if (evaluation.score > 0) {
+    const certificate = certifyCounterexample(c, g);
+    switch (certificate.verdict) {
+      case 'certified':
+        return { kind: 'refutes', certification: 'certified' };
+      case 'equality':
+        return { kind: 'tight', certification: null };
+      case 'holds':
+        return { kind: 'holds', certification: null };
+      case 'numerical-only':
+        // Every input certified, but the score's box straddles 0: an equality case.
+        if (certificate.numerical.length === 0) return { kind: 'tight', certification: null };
+        return { kind: 'numerical-only', certification: 'numerical' };
+      default:
+        return { kind: 'numerical-only', certification: 'numerical' };
+    }
+  }
   if (evaluation.score >= -ROUNDING_MARGIN) return { kind: 'tight', certification: null };
   return { kind: 'holds', certification: null };
 }
@@ -34,7 +52,9 @@ export function judge(_c: Conjecture, _g: Graph, evaluation: Evaluation): Verdic
 export function describeVerdict(v: Verdict): string {
   switch (v.kind) {
     case 'refutes':
-      return `refutes (${v.certification})`;
+      return 'refutes (certified)';
+    case 'numerical-only':
+      return 'score > 0, numerical only (not certified)';
     case 'tight':
       return 'holds (tight)';
     case 'holds':
@@ -44,7 +64,7 @@ export function describeVerdict(v: Verdict): string {
   }
 }
 
-/** Exit status of a check: 0 when some graph refutes the conjecture, 1 when none does. */
+/** Exit status of a check: 0 when some graph refutes the conjecture (certified), 1 when none does. */
 export function checkExitStatus(refutations: number): 0 | 1 {
   return refutations > 0 ? 0 : 1;
 }

@@ -106,6 +106,27 @@ export function reproduceCommands(run: RunFiles): string[] {
   return commands;
 }
 
+/** At most this many points per plotted series; longer runs are bucketed. */
+const MAX_PLOT_POINTS = 1500;
+
+/** Buckets a long series: the best score of each bucket (the curve's envelope) and the mean elite score. */
+export function downsampleSeries(
+  series: ReadonlyArray<RunScorePoint>,
+  max = MAX_PLOT_POINTS,
+): RunScorePoint[] {
+  if (series.length <= max) return [...series];
+  const size = Math.ceil(series.length / max);
+  const out: RunScorePoint[] = [];
+  for (let i = 0; i < series.length; i += size) {
+    const bucket = series.slice(i, i + size);
+    const best = Math.max(...bucket.map((p) => p.best));
+    const finite = bucket.map((p) => p.eliteMean).filter(Number.isFinite);
+    const eliteMean = finite.length ? finite.reduce((a, b) => a + b, 0) / finite.length : -Infinity;
+    out.push({ iteration: bucket[bucket.length - 1].iteration, best, eliteMean });
+  }
+  return out;
+}
+
 /** The whole report page. */
 export function renderRunReport(input: ReportInput): string {
   const { run } = input;
@@ -148,21 +169,29 @@ export function renderRunReport(input: ReportInput): string {
   html.push('<h2>Score over iterations</h2>');
   if (input.series.length === 0) html.push('<p class="muted">log.jsonl has no iteration records yet.</p>');
   else {
+    const plotted = downsampleSeries(input.series);
     html.push(
       scorePlotSvg(
         [
           {
             label: 'best in batch',
             colour: '#1f77b4',
-            points: input.series.map((p) => [p.iteration, p.best] as const),
+            points: plotted.map((p) => [p.iteration, p.best] as const),
           },
           {
             label: 'elite mean',
             colour: '#ff7f0e',
-            points: input.series.map((p) => [p.iteration, p.eliteMean] as const),
+            points: plotted.map((p) => [p.iteration, p.eliteMean] as const),
           },
         ],
-        { title: 'score (> 0 refutes)', xLabel: 'iteration', yLabel: 'score', width: 900, height: 320 },
+        {
+          title: 'score (> 0 refutes)',
+          xLabel: 'iteration',
+          yLabel: 'score',
+          width: 900,
+          height: 320,
+          integerX: true,
+        },
       ),
     );
   }

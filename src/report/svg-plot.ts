@@ -19,15 +19,17 @@ export interface PlotOptions {
   readonly title?: string;
   readonly xLabel?: string;
   readonly yLabel?: string;
+  /** Ticks on the x axis at whole numbers only (iterations). */
+  readonly integerX?: boolean;
 }
 
 /** Tick values covering [lo, hi] with about `count` nice steps. */
-export function niceTicks(lo: number, hi: number, count = 5): number[] {
+export function niceTicks(lo: number, hi: number, count = 5, minStep = 0): number[] {
   if (!(hi > lo)) return [lo];
   const raw = (hi - lo) / count;
   const power = Math.pow(10, Math.floor(Math.log10(raw)));
   const fraction = raw / power;
-  const step = (fraction <= 1 ? 1 : fraction <= 2 ? 2 : fraction <= 5 ? 5 : 10) * power;
+  const step = Math.max(minStep, (fraction <= 1 ? 1 : fraction <= 2 ? 2 : fraction <= 5 ? 5 : 10) * power);
   const ticks: number[] = [];
   for (let t = Math.ceil(lo / step - 1e-9) * step; t <= hi + step * 1e-9; t += step)
     ticks.push(Math.abs(t) < step * 1e-9 ? 0 : t);
@@ -69,7 +71,7 @@ export function scorePlotSvg(series: ReadonlyArray<PlotSeries>, options: PlotOpt
   out.push(`<line x1="${left}" y1="${top}" x2="${left}" y2="${height - bottom}"/>`);
   out.push('</g>');
   out.push('<g class="ticks" fill="#444444">');
-  for (const t of niceTicks(x0, x1, 6)) {
+  for (const t of niceTicks(x0, x1, 6, options.integerX ? 1 : 0)) {
     out.push(`<text x="${px(t)}" y="${height - bottom + 16}" text-anchor="middle">${formatNumber(t)}</text>`);
   }
   for (const t of niceTicks(y0, y1, 5)) {

@@ -70,7 +70,7 @@ describe('refute check', () => {
     // And exactly the graphs networkx finds disconnected / with a vertex of degree 5.
     expect(refuting('always-connected').map((x) => x.graph6)).toEqual(disconnectedSix);
     expect(refuting('no-dominating-vertex').map((x) => x.graph6)).toEqual(dominatedSix);
-    expect(new Set(refuting('always-connected').map((x) => x.certification))).toEqual(new Set(['numerical']));
+    expect(new Set(refuting('always-connected').map((x) => x.certification))).toEqual(new Set(['certified']));
     expect(records[0].source).toBe('stdin line 1');
   });
 
@@ -81,9 +81,9 @@ describe('refute check', () => {
     const lines = r.stdout.trim().split('\n');
     expect(lines[0]).toBe('always-connected: Every graph is connected');
     expect(lines[1]).toMatch(/^Dhc\s+-1\s+holds\s+argument 1$/);
-    expect(lines[2]).toMatch(/^B\?\s+1\s+refutes \(numerical\)\s+argument 2$/);
+    expect(lines[2]).toMatch(/^B\?\s+1\s+refutes \(certified\)\s+argument 2$/);
     expect(lines[3]).toBe(
-      'always-connected: 2 graphs: 1 refutes it (numerical, not yet certified), 1 hold, 0 tight, 0 outside the domain; first counterexample B? (argument 2)',
+      'always-connected: 2 graphs: 1 refutes it (certified), 1 hold, 0 tight, 0 outside the domain; first counterexample B? (argument 2)',
     );
   });
 
@@ -120,7 +120,7 @@ describe('refute check', () => {
     expect(JSON.parse(known.stdout)).toMatchObject({
       graph6: 'IJ~~~~~~w',
       verdict: 'refutes',
-      certification: 'numerical',
+      certification: 'certified',
     });
   });
 
@@ -133,7 +133,7 @@ describe('refute check', () => {
       '14',
     ]);
     expect(r.status).toBe(1);
-    expect(r.stdout).toMatch(/: \d+ graphs: 0 refute it, .*; best score -\S+ on /);
+    expect(r.stdout).toMatch(/: \d+ graphs: 0 refute it \(certified\), .*; best score -\S+ on /);
   });
 
   it.each([

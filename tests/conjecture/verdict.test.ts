@@ -1,31 +1,58 @@
 import { describe, expect, it } from 'vitest';
 import { judge, checkExitStatus, ROUNDING_MARGIN } from '../../src/conjecture/verdict.js';
 import { defineConjecture } from '../../src/conjecture/define.js';
-import { path } from '../../src/graph/families.js';
+import { evaluateConjecture } from '../../src/conjecture/evaluate.js';
+import { complete, path, star } from '../../src/graph/families.js';
+import { type Conjecture } from '../../src/conjecture/types.js';
+import { type Graph } from '../../src/graph/graph.js';
 
-const c = defineConjecture({ name: 'x', statement: 's', vertices: 3, score: () => 0 });
-const g = path(3);
+const verdictOf = (c: Conjecture, g: Graph) => judge(c, g, evaluateConjecture(c, g));
 
 describe('judge()', () => {
-  it('calls a positive score beyond the rounding margin a numerical refutation', () => {
-    expect(judge(c, g, { inDomain: true, score: 0.5 })).toEqual({
-      kind: 'refutes',
-      certification: 'numerical',
+  it('calls a certified positive score a refutation', () => {
+    // Δ(P3) = 2 > 1.5: a false claim with an exact integer margin.
+    const c = defineConjecture({ name: 'x', statement: 's', vertices: 3, score: (g) => g.maxDegree - 1.5 });
+    expect(verdictOf(c, path(3))).toEqual({ kind: 'refutes', certification: 'certified' });
+  });
+
+  it('calls a positive float score on an equality case tight, never a refutation', () => {
+    // The star K_{1,n-1} has spectrum ±sqrt(n-1) and 0 (Cvetković–Rowlinson–Simić 2010, §1.1), so
+    // λ1^2 - (n-1) is 0 exactly; in floating point it is +4.4e-16 on the star with 8 vertices.
+    const c = defineConjecture({
+      name: 'star-radius',
+      statement: 's',
+      vertices: 8,
+      score: (g) => g.spectralRadius * g.spectralRadius - (g.n - 1),
     });
-    expect(judge(c, g, { inDomain: true, score: Infinity }).kind).toBe('refutes');
+    const evaluation = evaluateConjecture(c, star(8));
+    expect(evaluation.inDomain && evaluation.score).toBeGreaterThan(0);
+    expect(judge(c, star(8), evaluation)).toEqual({ kind: 'tight', certification: null });
   });
 
-  it('calls |score| <= the margin tight: a true theorem tight on g may score +1e-15 by rounding', () => {
-    expect(judge(c, g, { inDomain: true, score: 0 }).kind).toBe('tight');
-    expect(judge(c, g, { inDomain: true, score: 4e-16 }).kind).toBe('tight');
-    expect(judge(c, g, { inDomain: true, score: ROUNDING_MARGIN }).kind).toBe('tight');
-    expect(judge(c, g, { inDomain: true, score: -ROUNDING_MARGIN }).kind).toBe('tight');
+  it('calls a positive score that uses an uncertifiable invariant numerical only', () => {
+    // estradaIndex(K_3) = e^2 + 2e^-1 ≈ 8.13 (closed form from the spectrum 2, -1, -1).
+    const c = defineConjecture({ name: 'e', statement: 's', vertices: 3, score: (g) => g.estradaIndex - 8 });
+    expect(verdictOf(c, complete(3))).toEqual({ kind: 'numerical-only', certification: 'numerical' });
   });
 
-  it('calls a negative score beyond the margin holds, and the outside of the domain so', () => {
-    expect(judge(c, g, { inDomain: true, score: -1 })).toEqual({ kind: 'holds', certification: null });
-    expect(judge(c, g, { inDomain: true, score: -Infinity }).kind).toBe('holds');
-    expect(judge(c, g, { inDomain: false })).toEqual({ kind: 'outside-domain', certification: null });
+  it('labels a non-positive score within the margin tight, a lower one holds, and the outside of the domain so', () => {
+    const at = (value: number) =>
+      defineConjecture({ name: 'k', statement: 's', vertices: 3, score: () => value });
+    expect(verdictOf(at(0), path(3)).kind).toBe('tight');
+    expect(verdictOf(at(-ROUNDING_MARGIN), path(3)).kind).toBe('tight');
+    expect(verdictOf(at(-1), path(3))).toEqual({ kind: 'holds', certification: null });
+    expect(verdictOf(at(-Infinity), path(3)).kind).toBe('holds');
+    const connectedOnly = defineConjecture({
+      name: 'c',
+      statement: 's',
+      vertices: 3,
+      connected: true,
+      score: () => 1,
+    });
+    expect(judge(connectedOnly, path(3), { inDomain: false })).toEqual({
+      kind: 'outside-domain',
+      certification: null,
+    });
   });
 });
 

@@ -5,7 +5,6 @@ import { decodeGraph6 } from '../../src/graph/graph6.js';
 import { canonicalGraph6 } from '../../src/graph/canonical.js';
 import { loadConjectureFile, selectConjecture } from '../../src/conjecture/load.js';
 import { runSweep, type SweepOrderSummary, type SweepRequest } from '../../src/enumerate/sweep.js';
-import { sweepPart } from '../../src/enumerate/sweep-part.js';
 
 const fixture = (name: string): string =>
   fileURLToPath(new URL(`../fixtures/sweep/${name}`, import.meta.url));
