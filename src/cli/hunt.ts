@@ -41,6 +41,7 @@ interface HuntFlags {
   report?: boolean;
   conjecture?: string;
   plain?: boolean;
+  polishEvery?: string;
 }
 
 /**
@@ -119,6 +120,10 @@ export function addHuntCommand(program: Command, outcome: CommandOutcome): void 
     .option('--until-found', 'stop at the first counterexample')
     .option('--threads <t>', 'worker threads for sampling and scoring (same results for any t; default 1)')
     .option('--plain', 'the plain method, without collapse handling (for comparisons)')
+    .option(
+      '--polish-every <k>',
+      `polish the batch's best graphs by local search every k iterations, 0 for never (default ${HUNT_DEFAULTS.polish.every}; 0 with --plain)`,
+    )
     .option('--out <dir>', 'run folder (default runs/<name>-seed<s>-<time>)')
     .option('--report', 'keep DIR/report.html up to date while the hunt runs')
     .action(async (file: string, flags: HuntFlags) => {
@@ -133,6 +138,9 @@ export function addHuntCommand(program: Command, outcome: CommandOutcome): void 
         numberOption('--learning-rate', flags.learningRate, 0, 10, true) ?? HUNT_DEFAULTS.learningRate;
       const trainGraphs =
         integerOption('--train-graphs', flags.trainGraphs, 1, 100_000) ?? HUNT_DEFAULTS.trainGraphs;
+      const polishEvery =
+        integerOption('--polish-every', flags.polishEvery, 0, 1_000_000) ??
+        (flags.plain === true ? 0 : HUNT_DEFAULTS.polish.every);
       const stop = stopConditions(flags);
       const threads = threadsOption(flags.threads);
       const loaded = await loadConjectureFile(file);
@@ -154,6 +162,7 @@ export function addHuntCommand(program: Command, outcome: CommandOutcome): void 
         learningRate,
         trainGraphs,
         explore: flags.plain !== true,
+        polishEvery,
       };
       const target = huntTarget(loaded, conjecture);
       // tfjs is loaded only by the commands that need it: it costs about a second of start-up.

@@ -44,6 +44,8 @@ interface StoredState {
   best: StoredCandidate[];
   counterexamples: Array<{ key: string; score: number | string; certification: string }>;
   collapse: CollapseState;
+  /** Absent in checkpoints written before polishing existed. */
+  nearMisses?: Array<{ graph6: string; score: number | string; counterexample: string | null }>;
   sha256: { weights: string; optimizer: string };
 }
 
@@ -111,6 +113,11 @@ export function writeCheckpoint(dir: string, runId: string, state: HuntState): v
       certification: c.certification,
     })),
     collapse: state.collapse,
+    nearMisses: state.nearMisses.map((s) => ({
+      graph6: encodeGraph6(s.graph),
+      score: encodeScore(s.score),
+      counterexample: s.counterexample,
+    })),
     sha256: { weights: sha256(weights), optimizer: sha256(optimizer) },
   };
   const tmp = join(dir, 'checkpoint.tmp');
@@ -197,6 +204,12 @@ function readFrom(folder: string, runId: string): HuntState {
         certification: c.certification === 'certified' ? 'certified' : 'numerical',
       })),
       collapse: { ...stored.collapse, freshOnly: stored.collapse.freshOnly ?? 0 },
+      nearMisses: (stored.nearMisses ?? []).map((s) => ({
+        graph: decodeGraph6(String(s.graph6)),
+        score: decodeScore(s.score),
+        counterexample:
+          s.counterexample === 'certified' || s.counterexample === 'numerical' ? s.counterexample : null,
+      })),
     };
   } catch {
     throw corrupt(folder, 'state.json has malformed fields');

@@ -63,6 +63,7 @@ export function huntOptionsOf(options: RunOptions, connected: boolean): HuntOpti
     trainGraphs: options.trainGraphs,
     explore: options.explore,
     connected,
+    polish: { ...HUNT_DEFAULTS.polish, every: options.polishEvery ?? 0 },
   };
 }
 
@@ -167,6 +168,8 @@ function logIteration(log: RunLogger, r: IterationReport, state: HuntState, batc
       action: r.action,
       perturbations: state.collapse.perturbations,
       restarts: state.collapse.restarts,
+      polish: r.polish,
+      nearMisses: state.nearMisses.length,
       ms: {
         generate: Math.round(r.timings.generate),
         score: Math.round(r.timings.score),
@@ -233,7 +236,14 @@ export async function driveRun(ctx: DriveContext, initial: HuntState): Promise<D
       stoppedBy = 'minutes';
       break;
     }
-    const { state: next, report } = await runIteration(ctx.tf, options, state, ctx.source, ctx.target.judge);
+    const { state: next, report } = await runIteration(
+      ctx.tf,
+      options,
+      state,
+      ctx.source,
+      ctx.target.judge,
+      ctx.target.evaluate,
+    );
     const written = appendCounterexamples(dir, report.newCounterexamples);
     persist(dir, manifest, next);
     logIteration(log, report, next, options.batch);

@@ -23,6 +23,8 @@ export interface RunOptions {
   readonly learningRate: number;
   readonly trainGraphs: number;
   readonly explore: boolean;
+  /** Polish every k-th iteration (0: never); absent in runs made before polishing existed (= 0). */
+  readonly polishEvery?: number;
 }
 
 export interface RunManifest {
@@ -94,7 +96,8 @@ export function readManifest(dir: string): RunManifest {
     isNumberArray(o.layers) &&
     typeof o.learningRate === 'number' &&
     Number.isInteger(o.trainGraphs) &&
-    typeof o.explore === 'boolean';
+    typeof o.explore === 'boolean' &&
+    (o.polishEvery === undefined || (Number.isInteger(o.polishEvery) && o.polishEvery >= 0));
   if (!ok)
     throw new InputError(
       `${path}: not a refute run manifest of version ${MANIFEST_VERSION} (missing or malformed fields)`,

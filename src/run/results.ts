@@ -12,6 +12,7 @@ import { type Graph } from '../graph/graph.js';
 import { componentCount } from '../invariants/components.js';
 import { type CounterexampleRecord, type HuntState } from '../search/hunt.js';
 import { appendDurably, replaceAtomically } from './atomic-files.js';
+import { nearMissRecord } from '../search/polish/hunt-bridge.js';
 
 export function bestPath(dir: string): string {
   return join(dir, 'best.g6');
@@ -93,6 +94,11 @@ export function writeSummary(dir: string, state: HuntState, context: SummaryCont
       const g = fromUpperTriangleBits(order, c.bits);
       return { graph6: c.key, score: jsonScore(c.score), ...keyInvariants(g) };
     }),
+    // Polishing's best graph at each other order (a counterexample at n+1 still refutes).
+    nearMisses: state.nearMisses.map((s) => ({
+      ...nearMissRecord(s, order, s.counterexample),
+      ...keyInvariants(s.graph),
+    })),
   };
   replaceAtomically(summaryPath(dir), JSON.stringify(summary, null, 2) + '\n');
 }

@@ -33,6 +33,13 @@ import { iterationRng } from './random.js';
 import { type SampledBatch } from './sampler.js';
 import { type Candidate, mergeBest, rankCandidates, takeTop } from './selection.js';
 import { ADAM_DEFAULTS, type OptimizerState, freshOptimizerState, trainEpoch } from './training.js';
+import {
+  HUNT_POLISH_DEFAULTS,
+  type HuntNearMiss,
+  type HuntPolishSettings,
+  polishDue,
+  polishIteration,
+} from './polish/hunt-bridge.js';
 
 /** The result of evaluating a conjecture on one graph (same shape as the conjecture module's). */
 export type Evaluation = { readonly inDomain: false } | { readonly inDomain: true; readonly score: number };
@@ -72,6 +79,8 @@ export interface HuntOptions {
   /** Length of the best-ever list (best.g6). */
   readonly bestCapacity: number;
   readonly collapse: CollapseSettings;
+  /** Polishing of the batch's best graphs every `polish.every` iterations (src/search/polish). */
+  readonly polish: HuntPolishSettings;
 }
 
 export const HUNT_DEFAULTS = {
@@ -84,6 +93,7 @@ export const HUNT_DEFAULTS = {
   explore: true,
   bestCapacity: 20,
   collapse: COLLAPSE_DEFAULTS,
+  polish: HUNT_POLISH_DEFAULTS,
 };
 
 /** Probability clamp when exploring: about one off-policy decision every two graphs. */
@@ -111,6 +121,8 @@ export interface HuntState {
   /** The counterexamples found so far, in order of discovery. */
   readonly counterexamples: readonly CounterexampleRecord[];
   readonly collapse: CollapseState;
+  /** Best graph polishing found at each other order ("near misses at order n±k"). */
+  readonly nearMisses: readonly HuntNearMiss[];
 }
 
 export function policyShape(o: HuntOptions): PolicyShape {
@@ -127,6 +139,7 @@ export function initialHuntState(o: HuntOptions): HuntState {
     best: [],
     counterexamples: [],
     collapse: FRESH_COLLAPSE_STATE,
+    nearMisses: [],
   };
 }
 
@@ -145,6 +158,8 @@ export interface IterationReport {
   readonly action: CollapseAction;
   /** Counterexamples first seen in this iteration, in batch order. */
   readonly newCounterexamples: readonly CounterexampleRecord[];
+  /** This iteration's polish: graphs improved and graphs scored (null when none was due). */
+  readonly polish: { readonly improved: number; readonly evaluations: number } | null;
   /** Wall-clock milliseconds per phase (not part of the deterministic state). */
   readonly timings: { generate: number; score: number; select: number; train: number };
 }
@@ -156,6 +171,8 @@ export async function runIteration(
   state: HuntState,
   source: BatchSource,
   judge: CounterexampleJudge,
+  /** Synchronous scoring for the polisher; without it no polish runs. */
+  polishEvaluate?: (g: Graph) => Evaluation,
 ): Promise<{ state: HuntState; report: IterationReport }> {
   const t = state.iteration;
   const n = pairCount(o.order);
@@ -196,7 +213,27 @@ export async function runIteration(
   const tScore = performance.now() - t0;
 
   t0 = performance.now();
-  const ranked = rankCandidates([...state.pool, ...fresh]);
+  const rankedBatch = rankCandidates([...state.pool, ...fresh]);
+  // Polishing: improved graphs join the ranking (so the pool, the elite and the best-ever list);
+  // finds at other orders are kept apart as near misses.
+  const polished =
+    polishEvaluate !== undefined && polishDue(t, o.polish.every)
+      ? polishIteration(
+          polishEvaluate,
+          judge,
+          rankedBatch,
+          state.nearMisses,
+          o.order,
+          o.seed,
+          t,
+          o.polish,
+          o.connected,
+        )
+      : undefined;
+  const ranked =
+    polished !== undefined && polished.candidates.length > 0
+      ? rankCandidates([...polished.candidates, ...rankedBatch])
+      : rankedBatch;
   const eliteCount = Math.max(1, Math.round(o.elite * o.batch));
   const keepCount = Math.round(o.keep * o.batch);
   // Right after a perturbation or restart the elite comes from fresh samples only (collapse.ts).
@@ -219,6 +256,12 @@ export async function runIteration(
     known.add(c.key);
     newCounterexamples.push({ key: c.key, score: c.score, certification: verdict });
   }
+  polished?.candidates.forEach((c, i) => {
+    const verdict = judge(polished.graphs[i], { inDomain: true, score: c.score });
+    if (verdict === null || known.has(c.key)) return;
+    known.add(c.key);
+    newCounterexamples.push({ key: c.key, score: c.score, certification: verdict });
+  });
   const distinctFraction = labelled.size / o.batch;
   let eliteSum = 0;
   let eliteInDomain = 0;
@@ -275,6 +318,7 @@ export async function runIteration(
     best,
     counterexamples: [...state.counterexamples, ...newCounterexamples],
     collapse,
+    nearMisses: polished?.nearMisses ?? state.nearMisses,
   };
   return {
     state: next,
@@ -290,6 +334,8 @@ export async function runIteration(
       collapsed,
       action,
       newCounterexamples,
+      polish:
+        polished === undefined ? null : { improved: polished.improved, evaluations: polished.evaluations },
       timings: { generate: tGenerate, score: tScore, select: tSelect, train: tTrain },
     },
   };

@@ -6,7 +6,11 @@
  * summary.json. Order-changing finds never come back as decisions: a fixed-order hunt's pool
  * holds graphs of its order only.
  */
+import { fromUpperTriangleBits } from '../../graph/builders.js';
 import { type Graph, hasEdge } from '../../graph/graph.js';
+import { type Evaluation } from '../../conjecture/types.js';
+import { graphKey } from '../graph-key.js';
+import { type Candidate, takeTop } from '../selection.js';
 import { encodeGraph6 } from '../../graph/graph6.js';
 import { polishGraphs } from './polish-graphs.js';
 import { type Evaluate, type ScoredGraph } from './vns.js';
@@ -116,11 +120,82 @@ export function nearMissRecord(
 }
 
 /** Merges near misses: the best per order, by increasing order. */
-export function mergeNearMisses(held: readonly ScoredGraph[], found: readonly ScoredGraph[]): ScoredGraph[] {
-  const byOrder = new Map<number, ScoredGraph>();
+export function mergeNearMisses<T extends ScoredGraph>(
+  held: readonly T[],
+  found: readonly ScoredGraph[],
+): Array<T | ScoredGraph> {
+  const byOrder = new Map<number, T | ScoredGraph>();
   for (const s of [...held, ...found]) {
     const h = byOrder.get(s.graph.order);
     if (h === undefined || s.score > h.score) byOrder.set(s.graph.order, s);
   }
   return [...byOrder.entries()].sort((a, b) => a[0] - b[0]).map(([, s]) => s);
+}
+
+/** A near miss as the hunt keeps it: the graph, its score, and the hunt's counterexample decision. */
+export interface HuntNearMiss extends ScoredGraph {
+  readonly counterexample: 'numerical' | 'certified' | null;
+}
+
+/** What one polish inside an iteration hands back to the hunt loop. */
+export interface IterationPolish {
+  /** Improved graphs as candidates for ranking (pool, elite, best-ever), best first. */
+  readonly candidates: readonly Candidate[];
+  /** The same graphs, for the counterexample decision. */
+  readonly graphs: readonly Graph[];
+  /** The run's near misses at other orders, updated. */
+  readonly nearMisses: readonly HuntNearMiss[];
+  readonly improved: number;
+  readonly evaluations: number;
+}
+
+/**
+ * The polish of iteration t of a hunt: the `settings.graphs` best distinct in-domain candidates
+ * of `ranked` are polished at the hunt's order; the improved ones come back as candidates and
+ * the finds at other orders are merged into `held` (best per order, judged by `judge`).
+ */
+export function polishIteration(
+  evaluate: Evaluate,
+  judge: (g: Graph, evaluation: Evaluation) => 'numerical' | 'certified' | null,
+  ranked: readonly Candidate[],
+  held: readonly HuntNearMiss[],
+  order: number,
+  seed: string,
+  iteration: number,
+  settings: HuntPolishSettings,
+  connected: boolean,
+): IterationPolish {
+  const starts = takeTop(
+    ranked.filter((c) => c.inDomain),
+    settings.graphs,
+    true,
+  );
+  const graphs = starts.map((c) => fromUpperTriangleBits(order, c.bits));
+  const r = polishForHunt(
+    evaluate,
+    graphs,
+    starts.map((c) => c.score),
+    seed,
+    iteration,
+    settings,
+    connected,
+  );
+  const candidates = r.improved.map((i): Candidate => ({
+    bits: i.bits,
+    key: graphKey(i.graph),
+    inDomain: true,
+    score: i.score,
+  }));
+  const merged = mergeNearMisses(held, r.nearMisses);
+  const nearMisses = merged.map((s): HuntNearMiss => {
+    const known = held.find((h) => h.graph === s.graph);
+    return known ?? { ...s, counterexample: judge(s.graph, { inDomain: true, score: s.score }) };
+  });
+  return {
+    candidates,
+    graphs: r.improved.map((i) => i.graph),
+    nearMisses,
+    improved: r.improved.length,
+    evaluations: r.evaluations,
+  };
 }
