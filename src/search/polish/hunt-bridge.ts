@@ -150,7 +150,7 @@ export interface IterationPolish {
 }
 
 /**
- * The polish of iteration t of a hunt: the `settings.graphs` best distinct in-domain candidates
+ * The polish of iteration t of a hunt: the `settings.graphs` best distinct candidates
  * of `ranked` are polished at the hunt's order; the improved ones come back as candidates and
  * the finds at other orders are merged into `held` (best per order, judged by `judge`).
  */
@@ -165,11 +165,10 @@ export function polishIteration(
   settings: HuntPolishSettings,
   connected: boolean,
 ): IterationPolish {
-  const starts = takeTop(
-    ranked.filter((c) => c.inDomain),
-    settings.graphs,
-    true,
-  );
+  // The best distinct candidates, in the domain first; a batch with none inside the domain is
+  // polished too (the polisher's restarts look for the domain, and any graph found there counts
+  // as an improvement over -Infinity).
+  const starts = takeTop(ranked, settings.graphs, true);
   const graphs = starts.map((c) => fromUpperTriangleBits(order, c.bits));
   const r = polishForHunt(
     evaluate,
