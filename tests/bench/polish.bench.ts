@@ -26,6 +26,11 @@ import { type Graph } from '../../src/graph/graph.js';
 import { polishGraph, POLISH_DEFAULTS } from '../../src/search/polish/vns.js';
 import { polishStream } from '../../src/search/polish/polish-graphs.js';
 import { randomGraph } from '../support/random-graph.js';
+import { startTensorflow, tf } from '../../src/search/backend.js';
+import { judgeCounterexample } from '../../src/search/counterexample.js';
+import { isCertifiedCounterexample } from '../../src/certify/certify.js';
+import { HUNT_DEFAULTS, type HuntOptions, initialHuntState, runIteration } from '../../src/search/hunt.js';
+import { localBatchSource } from '../../src/search/local-source.js';
 import { row } from './timing.js';
 
 const BUDGET = Number(process.env.BENCH_POLISH_BUDGET ?? 3000);
@@ -121,6 +126,70 @@ function median(xs: number[]): number {
   return s.length % 2 === 1 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
 }
 
+const HUNT_SEEDS = Number(process.env.BENCH_SEEDS ?? 3);
+const HUNT_ITERATIONS = Number(process.env.BENCH_ITERATIONS ?? 60);
+const HUNT_BATCH = Number(process.env.BENCH_BATCH ?? 300);
+const POLISH_EVERY = (process.env.BENCH_POLISH_EVERY ?? '0,5,1').split(',').map(Number);
+
+/** Iteration (0-based) and seconds to the hunt's first certified counterexample, or null. */
+async function huntRun(c: Conjecture, seed: string, every: number) {
+  const o: HuntOptions = {
+    ...HUNT_DEFAULTS,
+    seed,
+    order: c.vertices,
+    batch: HUNT_BATCH,
+    connected: c.connected,
+    polish: {
+      every,
+      graphs: Number(process.env.BENCH_POLISH_GRAPHS ?? HUNT_DEFAULTS.polish.graphs),
+      steps: Number(process.env.BENCH_POLISH_STEPS ?? HUNT_DEFAULTS.polish.steps),
+    },
+  };
+  const evaluate = (g: Graph) => evaluateConjecture(c, g);
+  const source = localBatchSource(tf, seed, evaluate);
+  // As refute hunt decides (src/cli/hunt.ts): the float pre-check, then exact certification.
+  const judge = (g: Graph, ev: Evaluation) =>
+    judgeCounterexample(g, ev) !== null && isCertifiedCounterexample(c, g) ? ('certified' as const) : null;
+  let state = initialHuntState(o);
+  const t0 = performance.now();
+  for (let i = 0; i < HUNT_ITERATIONS; i++) {
+    state = (await runIteration(tf, o, state, source, judge, evaluate)).state;
+    if (state.counterexamples.length > 0) return { iteration: i, seconds: (performance.now() - t0) / 1000 };
+  }
+  return { iteration: null, seconds: (performance.now() - t0) / 1000 };
+}
+
+/** The hunt with polishing every K iterations against the hunt without it (K = 0). */
+async function huntTable(claims: readonly Conjecture[]): Promise<void> {
+  await startTensorflow(1);
+  console.log(
+    `\nhunt to the first certified counterexample, ${HUNT_SEEDS} seeds, batch ${HUNT_BATCH}, at most ${HUNT_ITERATIONS} iterations;` +
+      ` polish: ${process.env.BENCH_POLISH_GRAPHS ?? HUNT_DEFAULTS.polish.graphs} graphs x ${process.env.BENCH_POLISH_STEPS ?? HUNT_DEFAULTS.polish.steps} scored graphs`,
+  );
+  const widths = [38, 4, 12, 8, 14, 10];
+  console.log(row(['claim', 'n', 'polish-every', 'found', 'med iteration', 'med s'], widths));
+  for (const c of claims) {
+    for (const every of POLISH_EVERY) {
+      const rs = [];
+      for (let s = 1; s <= HUNT_SEEDS; s++) rs.push(await huntRun(c, String(s), every));
+      const hits = rs.filter((r) => r.iteration !== null);
+      console.log(
+        row(
+          [
+            c.name,
+            c.vertices,
+            every === 0 ? 'off' : every,
+            `${hits.length}/${rs.length}`,
+            hits.length ? median(hits.map((r) => r.iteration!)) : '-',
+            hits.length ? median(hits.map((r) => r.seconds)).toFixed(1) : '-',
+          ],
+          widths,
+        ),
+      );
+    }
+  }
+}
+
 export default async function polishBench(): Promise<void> {
   console.log(
     `polish from G(n, 0.3) vs random G(n, p) sampling; ${RUNS} seeds, ${BUDGET} scored graphs per run`,
@@ -152,5 +221,13 @@ export default async function polishBench(): Promise<void> {
       ];
     };
     console.log(row([c.name, c.vertices, ...stats(polish), ...stats(sampling)], widths));
+  }
+  if (process.env.BENCH_POLISH_HUNT !== '0') {
+    const only = process.env.BENCH_CLAIMS?.split(',');
+    await huntTable(
+      examples.filter(
+        (c) => c.name !== 'hong-spectral-radius-bound' && (only === undefined || only.includes(c.name)),
+      ),
+    );
   }
 }
