@@ -35,17 +35,17 @@ export function buildProgram(outcome: CommandOutcome): Command {
     .showHelpAfterError('(run with --help for usage)')
     .exitOverride()
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
-  addInvariantsCommand(program, outcome);
   addCheckCommand(program, outcome);
-  addCertifyCommand(program, outcome);
-  addGenerateCommand(program, outcome);
   addSweepCommand(program, outcome);
   addHuntCommand(program, outcome);
   addResumeCommand(program, outcome);
   addDumpCommand(program, outcome);
+  addPolishCommand(program, outcome);
+  addCertifyCommand(program, outcome);
+  addInvariantsCommand(program, outcome);
+  addGenerateCommand(program, outcome);
   addDrawCommand(program, outcome);
   addReportCommand(program, outcome);
-  addPolishCommand(program, outcome);
   return program;
 }
 

@@ -3,6 +3,7 @@
  * fromUpperTriangleBits), when a polish is due, improved graphs at the hunt's order only, and
  * near-miss records for the other orders.
  */
+import { pairBitsOfGraph } from '../../src/search/pair-bits.js';
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
 import { fromEdges, fromUpperTriangleBits } from '../../src/graph/builders.js';
@@ -16,7 +17,6 @@ import {
   nearMissRecord,
   polishDue,
   polishForHunt,
-  upperTriangleBits,
 } from '../../src/search/polish/hunt-bridge.js';
 import { randomGraph, seededRng } from '../support/random-graph.js';
 
@@ -47,7 +47,7 @@ const SPIDER = fromEdges(10, [
   [3, 9],
 ]);
 
-describe('upperTriangleBits()', () => {
+describe('pairBitsOfGraph()', () => {
   test('is the inverse of fromUpperTriangleBits', () => {
     fc.assert(
       fc.property(
@@ -56,7 +56,7 @@ describe('upperTriangleBits()', () => {
         fc.nat(),
         (n, p, s) => {
           const g = randomGraph(n, p, seededRng(`bits-${s}`));
-          expect(graphsEqual(fromUpperTriangleBits(n, upperTriangleBits(g)), g)).toBe(true);
+          expect(graphsEqual(fromUpperTriangleBits(n, pairBitsOfGraph(g)), g)).toBe(true);
         },
       ),
       { numRuns: 100, seed: 21 },
@@ -65,7 +65,7 @@ describe('upperTriangleBits()', () => {
   test('follows graph6 pair order 01, 02, 12, 03, ...', () => {
     // The path 0-1-2-3 has pairs 01, 12, 23: positions 0, 2 and 5.
     expect([
-      ...upperTriangleBits(
+      ...pairBitsOfGraph(
         fromEdges(4, [
           [0, 1],
           [1, 2],

@@ -6,8 +6,9 @@
  * summary.json. Order-changing finds never come back as decisions: a fixed-order hunt's pool
  * holds graphs of its order only.
  */
+import { pairBitsOfGraph } from '../pair-bits.js';
 import { fromUpperTriangleBits } from '../../graph/builders.js';
-import { type Graph, hasEdge } from '../../graph/graph.js';
+import { type Graph } from '../../graph/graph.js';
 import { type Evaluation } from '../../conjecture/types.js';
 import { graphKey } from '../graph-key.js';
 import { type Candidate, takeTop } from '../selection.js';
@@ -42,14 +43,6 @@ export const HUNT_POLISH_DEFAULTS: HuntPolishSettings = Object.freeze({ every: 5
 /** Whether iteration t (0-based) ends with a polish. */
 export function polishDue(iteration: number, every: number): boolean {
   return every > 0 && (iteration + 1) % every === 0;
-}
-
-/** The graph's pairs in graph6 order (01, 02, 12, 03, ...), 1 for an edge: the inverse of fromUpperTriangleBits. */
-export function upperTriangleBits(g: Graph): Uint8Array {
-  const bits = new Uint8Array((g.order * (g.order - 1)) / 2);
-  let k = 0;
-  for (let j = 1; j < g.order; j++) for (let i = 0; i < j; i++, k++) bits[k] = hasEdge(g, i, j) ? 1 : 0;
-  return bits;
 }
 
 /** A polished graph the hunt can take back: at its order and strictly better than where it started. */
@@ -95,7 +88,7 @@ export function polishForHunt(
     if (o.best !== undefined && o.best.score > startScores[i]) {
       improved.push({
         graph: o.best.graph,
-        bits: upperTriangleBits(o.best.graph),
+        bits: pairBitsOfGraph(o.best.graph),
         score: o.best.score,
         from: i,
       });
