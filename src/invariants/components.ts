@@ -7,18 +7,30 @@
 import { type Graph } from '../graph/graph.js';
 import { type InvariantDefinition } from './registry.js';
 
-/** Component index of each vertex (0, 1, ... in order of their smallest vertex). */
-export function componentLabels(g: Graph): Int32Array {
+/** Components and a BFS 2-colouring, from one breadth-first search. */
+export interface ComponentStructure {
+  /** Component index of each vertex (0, 1, ... in order of their smallest vertex). */
+  readonly labels: Int32Array;
+  /** BFS layer parity of each vertex: a proper 2-colouring of every bipartite component. */
+  readonly colour: Int8Array;
+  /** Whether each component is bipartite (has no odd cycle). */
+  readonly bipartite: boolean[];
+}
+
+export function componentStructure(g: Graph): ComponentStructure {
   const n = g.order;
-  const label = new Int32Array(n).fill(-1);
+  const labels = new Int32Array(n).fill(-1);
+  const colour = new Int8Array(n);
+  const bipartite: boolean[] = [];
   const queue = new Int32Array(n);
-  let count = 0;
   for (let s = 0; s < n; s++) {
-    if (label[s] !== -1) continue;
+    if (labels[s] !== -1) continue;
+    const c = bipartite.length;
+    let odd = false;
     let head = 0;
     let tail = 0;
     queue[tail++] = s;
-    label[s] = count;
+    labels[s] = c;
     while (head < tail) {
       const u = queue[head++];
       const base = u * g.wordsPerRow;
@@ -28,23 +40,27 @@ export function componentLabels(g: Graph): Int32Array {
           const low = word & -word;
           const v = (w << 5) | (31 - Math.clz32(low));
           word ^= low;
-          if (label[v] === -1) {
-            label[v] = count;
+          if (labels[v] === -1) {
+            labels[v] = c;
+            colour[v] = 1 - colour[u];
             queue[tail++] = v;
-          }
+          } else if (colour[v] === colour[u]) odd = true;
         }
       }
     }
-    count++;
+    bipartite.push(!odd);
   }
-  return label;
+  return { labels, colour, bipartite };
+}
+
+/** Component index of each vertex (0, 1, ... in order of their smallest vertex). */
+export function componentLabels(g: Graph): Int32Array {
+  return componentStructure(g).labels;
 }
 
 /** Number of connected components. */
 export function componentCount(g: Graph): number {
-  let max = -1;
-  for (const l of componentLabels(g)) if (l > max) max = l;
-  return max + 1;
+  return componentStructure(g).bipartite.length;
 }
 
 /** Whether g has one component (n = 1 is connected). */
@@ -54,33 +70,8 @@ export function isConnected(g: Graph): boolean {
 
 /** A proper 2-colouring (0/1 per vertex) or null when g has an odd cycle. */
 export function bipartition(g: Graph): Int8Array | null {
-  const n = g.order;
-  const colour = new Int8Array(n).fill(-1);
-  const queue = new Int32Array(n);
-  for (let s = 0; s < n; s++) {
-    if (colour[s] !== -1) continue;
-    let head = 0;
-    let tail = 0;
-    queue[tail++] = s;
-    colour[s] = 0;
-    while (head < tail) {
-      const u = queue[head++];
-      const base = u * g.wordsPerRow;
-      for (let w = 0; w < g.wordsPerRow; w++) {
-        let word = g.rows[base + w];
-        while (word !== 0) {
-          const low = word & -word;
-          const v = (w << 5) | (31 - Math.clz32(low));
-          word ^= low;
-          if (colour[v] === -1) {
-            colour[v] = 1 - colour[u];
-            queue[tail++] = v;
-          } else if (colour[v] === colour[u]) return null;
-        }
-      }
-    }
-  }
-  return colour;
+  const { colour, bipartite } = componentStructure(g);
+  return bipartite.every((b) => b) ? colour : null;
 }
 
 export const COMPONENT_INVARIANTS: InvariantDefinition[] = [

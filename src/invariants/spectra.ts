@@ -15,7 +15,7 @@
  */
 import { type Graph } from '../graph/graph.js';
 import { InvariantDomainError } from '../errors.js';
-import { componentLabels } from './components.js';
+import { componentStructure } from './components.js';
 import { type InvariantDefinition, type InvariantMemo } from './registry.js';
 import { symmetricEigenvalues } from './symmetric-eigenvalues.js';
 import { spectralRadius } from './spectral-radius.js';
@@ -52,29 +52,10 @@ export function graphMatrix(g: Graph, kind: GraphMatrixKind): Float64Array {
 /** Number of eigenvalues known to be exactly 0, from the graph's structure. */
 function structuralZeroCount(g: Graph, kind: GraphMatrixKind): number {
   if (kind === 'adjacency') return 0;
-  const labels = componentLabels(g);
-  const count = labels.reduce((a, b) => Math.max(a, b), -1) + 1;
-  if (kind !== 'signlessLaplacian') return count;
-  // Q has eigenvalue 0 once for each bipartite component (Cvetković–Rowlinson–Simić, Prop. 7.8.1).
-  const colour = new Int8Array(g.order).fill(-1);
-  const bipartite = new Array<boolean>(count).fill(true);
-  const stack: number[] = [];
-  for (let s = 0; s < g.order; s++) {
-    if (colour[s] !== -1) continue;
-    colour[s] = 0;
-    stack.push(s);
-    while (stack.length > 0) {
-      const u = stack.pop()!;
-      for (let v = 0; v < g.order; v++) {
-        if (((g.rows[u * g.wordsPerRow + (v >>> 5)] >>> (v & 31)) & 1) === 0) continue;
-        if (colour[v] === -1) {
-          colour[v] = 1 - colour[u];
-          stack.push(v);
-        } else if (colour[v] === colour[u]) bipartite[labels[u]] = false;
-      }
-    }
-  }
-  return bipartite.filter((b) => b).length;
+  const { bipartite } = componentStructure(g);
+  // L and the normalized L: one zero per component. Q: one per bipartite component
+  // (Cvetković–Rowlinson–Simić 2010, Prop. 7.8.1, from memory).
+  return kind === 'signlessLaplacian' ? bipartite.filter((b) => b).length : bipartite.length;
 }
 
 /** Eigenvalues of the chosen matrix, non-increasing, structural zeros exact. */

@@ -13,7 +13,7 @@
  */
 import seedrandom from 'seedrandom';
 import { type Graph, neighbors } from '../graph/graph.js';
-import { componentLabels } from '../invariants/components.js';
+import { componentCount, componentLabels } from '../invariants/components.js';
 import { distanceMatrix } from '../invariants/distances.js';
 
 export type LayoutKind = 'auto' | 'force' | 'tree' | 'circle';
@@ -34,10 +34,6 @@ export function layoutGraph(g: Graph, kind: LayoutKind = 'auto', seed = 'refute'
   const points =
     chosen === 'circle' ? circleLayout(g.order) : chosen === 'tree' ? treeLayout(g) : forceLayout(g, seed);
   return normalise(points);
-}
-
-function componentCount(g: Graph): number {
-  return componentLabels(g).reduce((a, b) => Math.max(a, b), -1) + 1;
 }
 
 export function circleLayout(n: number): Point[] {
