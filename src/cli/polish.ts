@@ -23,8 +23,7 @@ import {
   type PolishSettings,
   type ScoredGraph,
 } from '../search/polish/vns.js';
-import { judge } from '../conjecture/verdict.js';
-import { certifyCounterexample } from '../certify/certify.js';
+import { describeVerdict, judge, type Verdict } from '../conjecture/verdict.js';
 import { type Conjecture } from '../conjecture/types.js';
 import { type GraphInput, readGraphInputs } from './graph-input.js';
 import { type CommandOutcome } from './main.js';
@@ -74,35 +73,13 @@ function describeStart(input: GraphInput, o: PolishOutcome): string {
 }
 
 /** What a polished graph says about the conjecture. */
-interface PolishVerdict {
-  /** The certifier's verdict when the float score is positive, else the float verdict. */
-  readonly kind: 'certified' | 'numerical-only' | 'equality' | 'disagreement' | 'holds' | 'tight';
-  readonly certified: boolean;
-}
+/** As in `check` (conjecture/verdict.ts): refutes only when exact certification confirms it. */
+type PolishVerdict = Verdict;
 
-/**
- * The one decision of `polish`: a graph with a positive float score goes to the certifier
- * (src/certify, the function hunt, check and sweep use), and refutes only when certified; the
- * others are judged by their float score (verdict.ts: "tight" within rounding of 0, "holds" below).
- */
+/** The project's one verdict (shared with check): a positive score refutes only when certified. */
 function verdictOf(c: Conjecture, s: ScoredGraph): PolishVerdict {
-  if (s.score > 0) {
-    const cert = certifyCounterexample(c, s.graph);
-    const kind = cert.verdict === 'outside-domain' ? 'disagreement' : cert.verdict;
-    return { kind, certified: cert.certified };
-  }
-  const v = judge(c, s.graph, { inDomain: true, score: s.score });
-  return { kind: v.kind === 'tight' ? 'tight' : 'holds', certified: false };
+  return judge(c, s.graph, { inDomain: true, score: s.score });
 }
-
-const VERDICT_TEXT: Readonly<Record<PolishVerdict['kind'], string>> = {
-  certified: 'refutes (certified)',
-  'numerical-only': 'numerical only (score > 0 within rounding, not certified)',
-  equality: 'holds (equality within rounding, not certified)',
-  disagreement: 'not certified (two computations disagree; see refute certify)',
-  holds: 'holds',
-  tight: 'holds (tight)',
-};
 
 function textBlock(input: GraphInput, o: PolishOutcome, verdicts: readonly PolishVerdict[]): string {
   const lines = [describeStart(input, o)];
@@ -111,7 +88,7 @@ function textBlock(input: GraphInput, o: PolishOutcome, verdicts: readonly Polis
     const g: Graph = s.graph;
     lines.push(
       `  best at n=${g.order}: ${encodeGraph6(g)}  m=${g.size}  score ${formatNumber(s.score)}  ` +
-        VERDICT_TEXT[verdicts[i].kind],
+        describeVerdict(verdicts[i]),
     );
   });
   lines.push(`  ${o.evaluations} graphs scored`);
@@ -133,7 +110,7 @@ function jsonLine(input: GraphInput, o: PolishOutcome, verdicts: readonly Polish
           size: s.graph.size,
           score: scoreToJson(s.score),
           verdict: v.kind,
-          certified: v.certified,
+          certified: v.kind === 'refutes',
         };
       }),
       evaluations: o.evaluations,
@@ -190,7 +167,7 @@ export function addPolishCommand(program: Command, outcome: CommandOutcome): voi
         };
         const o = polishGraph(evaluate, inputs[i].graph, polishStream(opts.seed, i), settings);
         const verdicts = resultsOf(o).map((s) => verdictOf(conjecture, s));
-        if (verdicts.some((v) => v.certified)) refuted = true;
+        if (verdicts.some((v) => v.kind === 'refutes')) refuted = true;
         await writeOut(opts.json ? jsonLine(inputs[i], o, verdicts) : textBlock(inputs[i], o, verdicts));
       }
       outcome.status = refuted ? 0 : 1;

@@ -95,7 +95,7 @@ describe('refute polish (end to end)', () => {
       for (const res of rec.results) {
         expect(Math.abs(res.order - rec.start.order)).toBeLessThanOrEqual(1);
         // Positive scores go to the certifier; these margins (> 0.01) are far above rounding.
-        if (res.score > 0.01) expect([res.verdict, res.certified]).toEqual(['certified', true]);
+        if (res.score > 0.01) expect([res.verdict, res.certified]).toEqual(['refutes', true]);
         if (res.score < -1e-9) expect([res.verdict, res.certified]).toEqual(['holds', false]);
         expect(decodeGraph6(res.graph6).order).toBe(res.order);
       }
@@ -146,6 +146,6 @@ describe('refute polish on an equality case', () => {
     const r = await runCli(['polish', 'scores/hong-spectral-radius-bound.ts', 'IsaCCA?_?', '--steps', '200']);
     expect(r.status).toBe(1);
     expect(r.stdout).not.toMatch(/refutes/);
-    expect(r.stdout).toMatch(/numerical only/);
+    expect(r.stdout).toMatch(/holds \(tight\)/);
   });
 });
