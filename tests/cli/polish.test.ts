@@ -13,6 +13,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { decodeGraph6 } from '../../src/graph/graph6.js';
 import { computeInvariant } from '../../src/invariants/registry.js';
 import { runCli } from '../support/run-cli.js';
+import { SPECTRAL_GAP_FILE } from '../support/spectral-gap-claim.js';
 
 // The spider: centre 0, leaves 4, 5, 6, legs 0-1-7, 0-2-8, 0-3-9; three leaf moves from K_{1,9}.
 const SPIDER = 'IsaCA?_C?';
@@ -23,20 +24,7 @@ let trueClaim = '';
 
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'refute-polish-'));
-  falseClaim = join(dir, 'gap.ts');
-  writeFileSync(
-    falseClaim,
-    `import { defineConjecture } from 'refute';
-export default defineConjecture({
-  name: 'triangle-free-spectral-gap',
-  statement: 'For connected triangle-free G: spectralRadius <= averageDegree + 1',
-  vertices: 10,
-  connected: true,
-  where: (g) => g.triangleCount === 0,
-  score: (g) => g.spectralRadius - g.averageDegree - 1,
-});
-`,
-  );
+  falseClaim = SPECTRAL_GAP_FILE;
   trueClaim = join(dir, 'pairs.ts');
   // True for every simple graph: m <= C(n,2); the score is at most -1.
   writeFileSync(

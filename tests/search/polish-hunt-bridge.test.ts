@@ -10,7 +10,6 @@ import { fromEdges, fromUpperTriangleBits } from '../../src/graph/builders.js';
 import { star } from '../../src/graph/families.js';
 import { decodeGraph6, encodeGraph6 } from '../../src/graph/graph6.js';
 import { type Graph, graphsEqual } from '../../src/graph/graph.js';
-import { defineConjecture } from '../../src/conjecture/define.js';
 import { evaluateConjecture } from '../../src/conjecture/evaluate.js';
 import {
   mergeNearMisses,
@@ -19,15 +18,8 @@ import {
   polishForHunt,
 } from '../../src/search/polish/hunt-bridge.js';
 import { randomGraph, seededRng } from '../support/random-graph.js';
+import { SPECTRAL_GAP as GAP } from '../support/spectral-gap-claim.js';
 
-const GAP = defineConjecture({
-  name: 'triangle-free-spectral-gap',
-  statement: 'For connected triangle-free G: spectralRadius <= averageDegree + 1',
-  vertices: 10,
-  connected: true,
-  where: (g) => g.triangleCount === 0,
-  score: (g) => g.spectralRadius - g.averageDegree - 1,
-});
 const evaluate = (g: Graph) => evaluateConjecture(GAP, g);
 const scoreOf = (g: Graph): number => {
   const ev = evaluate(g);

@@ -11,7 +11,6 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, test } from 'vitest';
-import { defineConjecture } from '../../src/conjecture/define.js';
 import { evaluateConjecture } from '../../src/conjecture/evaluate.js';
 import { loadConjectureFile, selectConjecture } from '../../src/conjecture/load.js';
 import { decodeGraph6 } from '../../src/graph/graph6.js';
@@ -29,15 +28,8 @@ import {
   runIteration,
 } from '../../src/search/hunt.js';
 import { localBatchSource } from '../../src/search/local-source.js';
+import { SPECTRAL_GAP as GAP } from '../support/spectral-gap-claim.js';
 
-const GAP = defineConjecture({
-  name: 'triangle-free-spectral-gap',
-  statement: 'For connected triangle-free G: spectralRadius <= averageDegree + 1',
-  vertices: 10,
-  connected: true,
-  where: (g) => g.triangleCount === 0,
-  score: (g) => g.spectralRadius - g.averageDegree - 1,
-});
 const evaluate = (g: Graph) => evaluateConjecture(GAP, g);
 
 beforeAll(async () => {

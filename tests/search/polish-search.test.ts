@@ -27,15 +27,7 @@ import { polishGraph, POLISH_DEFAULTS, type PolishOutcome } from '../../src/sear
 import { judge } from '../../src/conjecture/verdict.js';
 import { isCertifiedCounterexample } from '../../src/certify/certify.js';
 import { randomGraph, seededRng } from '../support/random-graph.js';
-
-const SPECTRAL_GAP = defineConjecture({
-  name: 'triangle-free-spectral-gap',
-  statement: 'For connected triangle-free G: spectralRadius <= averageDegree + 1',
-  vertices: 10,
-  connected: true,
-  where: (g) => g.triangleCount === 0,
-  score: (g) => g.spectralRadius - g.averageDegree - 1,
-});
+import { SPECTRAL_GAP } from '../support/spectral-gap-claim.js';
 
 const starScore = (n: number): number => Math.sqrt(n - 1) - (2 * (n - 1)) / n - 1;
 
