@@ -48,3 +48,14 @@ export {
   type CertifiedInput,
   type Verdict,
 } from './certify/certify.js';
+// Witnesses of the exact invariants, and the verifiers that check them (for scripts and papers).
+export { maximumMatching, isMatching } from './invariants/matching.js';
+export { maximumClique, isClique } from './invariants/cliques.js';
+export {
+  maximumIndependentSet,
+  minimumVertexCover,
+  isIndependentSet,
+  isVertexCover,
+} from './invariants/independence.js';
+export { minimumColouring, isProperColouring } from './invariants/colouring.js';
+export { minimumDominatingSet, isDominatingSet } from './invariants/domination.js';
