@@ -3,12 +3,12 @@ import { copyFileSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { loadConjectureFile, selectConjecture } from '../../src/conjecture/load.js';
-import { startTensorflow, tf } from '../../src/search/backend.js';
-import { localBatchSource } from '../../src/search/local-source.js';
+import { startTensorflow } from '../../src/search/backend.js';
 import { huntTarget } from '../../src/cli/hunt.js';
-import { type HuntTarget, createRun, driveRun, freshState, reopenRun } from '../../src/run/hunt-run.js';
+import { type HuntTarget, reopenRun } from '../../src/run/hunt-run.js';
 import { type RunOptions } from '../../src/run/manifest.js';
 import { readCheckpoint, writeCheckpoint } from '../../src/run/checkpoint.js';
+import { driveHunt } from '../support/drive-hunt.js';
 
 const fixture = new URL('../fixtures/conjectures/max-degree-7.ts', import.meta.url).pathname;
 const work = mkdtempSync(join(tmpdir(), 'refute-resume-'));
@@ -34,27 +34,8 @@ const options: RunOptions = {
   explore: true,
 };
 
-async function run(dir: string, iterations: number, resume: boolean): Promise<void> {
-  const opened = resume
-    ? reopenRun(dir)
-    : (() => {
-        const manifest = createRun(dir, target, options, 'wasm');
-        return { manifest, state: freshState(manifest) };
-      })();
-  await driveRun(
-    {
-      tf,
-      dir,
-      manifest: opened.manifest,
-      target,
-      source: localBatchSource(tf, opened.manifest.options.seed, target.evaluate),
-      stop: { iterations },
-      flag: { requested: false },
-      resumed: resume,
-    },
-    opened.state,
-  );
-}
+const run = (dir: string, iterations: number, resume: boolean): Promise<void> =>
+  driveHunt(dir, target, options, iterations, resume);
 
 const files = ['best.g6', 'counterexamples.g6', 'checkpoint/weights.bin', 'checkpoint/optimizer.bin'];
 

@@ -18,26 +18,13 @@ import {
   polishForHunt,
 } from '../../src/search/polish/hunt-bridge.js';
 import { randomGraph, seededRng } from '../support/random-graph.js';
-import { SPECTRAL_GAP as GAP } from '../support/spectral-gap-claim.js';
+import { SPECTRAL_GAP as GAP, SPIDER } from '../support/spectral-gap-claim.js';
 
 const evaluate = (g: Graph) => evaluateConjecture(GAP, g);
 const scoreOf = (g: Graph): number => {
   const ev = evaluate(g);
   return ev.inDomain ? ev.score : -Infinity;
 };
-
-// Centre 0, leaves 4, 5, 6, legs 0-1-7, 0-2-8, 0-3-9 (three leaf moves from K_{1,9}).
-const SPIDER = fromEdges(10, [
-  [0, 1],
-  [0, 2],
-  [0, 3],
-  [0, 4],
-  [0, 5],
-  [0, 6],
-  [1, 7],
-  [2, 8],
-  [3, 9],
-]);
 
 describe('pairBitsOfGraph()', () => {
   test('is the inverse of fromUpperTriangleBits', () => {

@@ -16,7 +16,7 @@ import { loadConjectureFile, selectConjecture } from '../../src/conjecture/load.
 import { decodeGraph6 } from '../../src/graph/graph6.js';
 import { type Graph } from '../../src/graph/graph.js';
 import { huntTarget } from '../../src/cli/hunt.js';
-import { type HuntTarget, createRun, driveRun, freshState, reopenRun } from '../../src/run/hunt-run.js';
+import { type HuntTarget } from '../../src/run/hunt-run.js';
 import { type RunOptions } from '../../src/run/manifest.js';
 import { startTensorflow, tf } from '../../src/search/backend.js';
 import { judgeCounterexample } from '../../src/search/counterexample.js';
@@ -29,6 +29,7 @@ import {
 } from '../../src/search/hunt.js';
 import { localBatchSource } from '../../src/search/local-source.js';
 import { SPECTRAL_GAP as GAP } from '../support/spectral-gap-claim.js';
+import { driveHunt } from '../support/drive-hunt.js';
 
 const evaluate = (g: Graph) => evaluateConjecture(GAP, g);
 
@@ -134,27 +135,8 @@ export default defineConjecture({
     target = huntTarget(loaded, selectConjecture(loaded));
   });
 
-  async function run(dir: string, iterations: number, resume: boolean): Promise<void> {
-    const opened = resume
-      ? reopenRun(dir)
-      : (() => {
-          const manifest = createRun(dir, target, runOptions, 'wasm');
-          return { manifest, state: freshState(manifest) };
-        })();
-    await driveRun(
-      {
-        tf,
-        dir,
-        manifest: opened.manifest,
-        target,
-        source: localBatchSource(tf, opened.manifest.options.seed, target.evaluate),
-        stop: { iterations },
-        flag: { requested: false },
-        resumed: resume,
-      },
-      opened.state,
-    );
-  }
+  const run = (dir: string, iterations: number, resume: boolean): Promise<void> =>
+    driveHunt(dir, target, runOptions, iterations, resume);
 
   test('summary.json lists near misses at n±1, and 2K iterations == K + resume K byte for byte', async () => {
     const whole = join(work, 'whole');

@@ -27,7 +27,7 @@ import { polishGraph, POLISH_DEFAULTS, type PolishOutcome } from '../../src/sear
 import { judge } from '../../src/conjecture/verdict.js';
 import { isCertifiedCounterexample } from '../../src/certify/certify.js';
 import { randomGraph, seededRng } from '../support/random-graph.js';
-import { SPECTRAL_GAP } from '../support/spectral-gap-claim.js';
+import { SPECTRAL_GAP, SPIDER } from '../support/spectral-gap-claim.js';
 
 const starScore = (n: number): number => Math.sqrt(n - 1) - (2 * (n - 1)) / n - 1;
 
@@ -51,19 +51,6 @@ function expectGenuine(c: Conjecture, g: Graph, reported: number): number {
   expect(ev.score).toBe(reported);
   return ev.score;
 }
-
-/** A spider: centre 0 with three leaves (4, 5, 6) and three legs of length 2 (0-1-7, 0-2-8, 0-3-9). */
-const SPIDER = fromEdges(10, [
-  [0, 1],
-  [0, 2],
-  [0, 3],
-  [0, 4],
-  [0, 5],
-  [0, 6],
-  [1, 7],
-  [2, 8],
-  [3, 9],
-]);
 
 describe('polishGraph()', () => {
   test('the spider is three leaf moves from the star K_{1,9}, which refutes the test conjecture', () => {
