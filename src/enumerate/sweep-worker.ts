@@ -25,9 +25,10 @@ const port = parentPort;
 if (port === null) throw new Error('sweep-worker.ts must run as a worker thread');
 const data = workerData as WorkerData;
 
-function reportError(err: unknown): void {
+/** Reports a failure; `id` names the unit it happened in (none when loading failed). */
+function reportError(err: unknown, id?: number): void {
   const message = err instanceof Error ? err.message : String(err);
-  port?.postMessage({ kind: 'error', message, input: err instanceof InputError });
+  port?.postMessage({ kind: 'error', id, message, input: err instanceof InputError });
 }
 
 let conjecture: Conjecture | null = null;
@@ -46,7 +47,7 @@ if (conjecture !== null) {
     try {
       port.postMessage({ kind: 'result', id: unit.id, result: sweepPart(c, unit.order, unit.part) });
     } catch (err) {
-      reportError(err);
+      reportError(err, unit.id);
     }
   });
   port.postMessage({ kind: 'ready' });

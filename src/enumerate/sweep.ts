@@ -137,7 +137,7 @@ class OrderedEmitter {
 type WorkerReply =
   | { readonly kind: 'ready' }
   | { readonly kind: 'result'; readonly id: number; readonly result: SweepPartResult }
-  | { readonly kind: 'error'; readonly message: string; readonly input: boolean };
+  | { readonly kind: 'error'; readonly id?: number; readonly message: string; readonly input: boolean };
 
 /**
  * Memory limits of a worker. A sweep allocates a short-lived graph and view per graph; left
@@ -174,7 +174,9 @@ async function runInThisThread(request: SweepRequest, plan: Unit[], emitter: Ord
 
 async function runInWorkers(request: SweepRequest, plan: Unit[], emitter: OrderedEmitter): Promise<void> {
   const workers: Worker[] = [];
-  const done = new Map<number, SweepPartResult>();
+  // A unit's result, or the error it raised: both are taken up strictly in unit order, so the
+  // error reported (the first one in plan order) does not depend on which worker is faster.
+  const done = new Map<number, SweepPartResult | Error>();
   let nextToAssign = 0;
   let nextToEmit = 0;
   let failure: Error | null = null;
@@ -197,8 +199,9 @@ async function runInWorkers(request: SweepRequest, plan: Unit[], emitter: Ordere
     const drain = (): void => {
       emitting = emitting.then(async () => {
         while (!finished && done.has(nextToEmit)) {
-          const result = done.get(nextToEmit) as SweepPartResult;
+          const result = done.get(nextToEmit) as SweepPartResult | Error;
           done.delete(nextToEmit);
+          if (result instanceof Error) throw result;
           await emitter.emit(plan[nextToEmit], result);
           nextToEmit++;
         }
@@ -223,7 +226,14 @@ async function runInWorkers(request: SweepRequest, plan: Unit[], emitter: Ordere
           done.set(reply.id, reply.result);
           assign(worker);
           drain();
-        } else fail(reply.input ? new InputError(reply.message) : new Error(reply.message));
+        } else {
+          const err = reply.input ? new InputError(reply.message) : new Error(reply.message);
+          if (reply.id === undefined) fail(err);
+          else {
+            done.set(reply.id, err);
+            drain();
+          }
+        }
       });
       worker.on('error', (err) => fail(err));
       worker.on('exit', (code) => {
